@@ -1,0 +1,64 @@
+import { EntityManager } from '@mikro-orm/postgresql';
+import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
+import type { SessionUser } from '@evenset/contracts';
+import { emailSchema, newPasswordSchema } from '@evenset/contracts';
+import { AppConfig } from '../config/app-config.service';
+import { User } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
+import { UNKNOWN_USER_HASH, verifyPassword } from './password';
+
+export function toSessionUser(user: User): SessionUser {
+  return {
+    id: user.id,
+    email: user.email,
+    displayName: user.displayName,
+    roles: [...user.roles],
+    displayUnit: user.displayUnit,
+  };
+}
+
+@Injectable()
+export class AuthService implements OnApplicationBootstrap {
+  private readonly logger = new Logger(AuthService.name);
+
+  constructor(
+    private readonly em: EntityManager,
+    private readonly users: UsersService,
+    private readonly config: AppConfig,
+  ) {}
+
+  /** The person behind these credentials, or null; unknown and inactive accounts answer alike. */
+  async checkCredentials(email: string, password: string): Promise<SessionUser | null> {
+    const user = await this.em
+      .fork()
+      .findOne(User, { email: email.trim().toLowerCase() }, { populate: ['passwordHash'] });
+    const matches = await verifyPassword(password, user?.passwordHash ?? UNKNOWN_USER_HASH);
+    return user && user.active && matches ? toSessionUser(user) : null;
+  }
+
+  /** The session's person as stored now: a deactivated account loses its sessions at once. */
+  async sessionUser(id: string): Promise<SessionUser | null> {
+    const user = await this.em.fork().findOne(User, { id });
+    return user?.active ? toSessionUser(user) : null;
+  }
+
+  /** Creates the first admin from EVENSET_ADMIN_EMAIL / EVENSET_ADMIN_PASSWORD when none exists. */
+  async onApplicationBootstrap(): Promise<void> {
+    const email = this.config.get('EVENSET_ADMIN_EMAIL');
+    const password = this.config.get('EVENSET_ADMIN_PASSWORD');
+    if (!email || !password) return;
+    const em = this.em.fork();
+    const admins = await em.count(User, {
+      roles: { $contains: ['admin'] },
+      active: true,
+    });
+    if (admins > 0) return;
+    await this.users.create(null, {
+      email: emailSchema.parse(email),
+      displayName: 'Administrator',
+      roles: ['admin'],
+      password: newPasswordSchema.parse(password),
+    });
+    this.logger.log(`Created the first admin account ${email}`);
+  }
+}

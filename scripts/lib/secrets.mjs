@@ -1,0 +1,14 @@
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { DATA_DIR } from './paths.mjs';
+
+/** A random secret kept in .data (ignored by git), so local sessions survive a restart. */
+export function localSecret(name) {
+  const file = join(DATA_DIR, `${name}.secret`);
+  if (existsSync(file)) return readFileSync(file, 'utf8').trim();
+  mkdirSync(DATA_DIR, { recursive: true });
+  const secret = randomBytes(32).toString('hex');
+  writeFileSync(file, `${secret}\n`, { mode: 0o600 });
+  return secret;
+}
