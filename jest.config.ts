@@ -57,6 +57,15 @@ const config: Config = {
       testEnvironment: 'jsdom',
       setupFilesAfterEnv: ['<rootDir>/jest.setup.ts'],
     },
+    {
+      displayName: 'browser',
+      rootDir: '<rootDir>/apps/web',
+      testMatch: ['<rootDir>/e2e/**/*.e2e-spec.ts'],
+      transform: { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/e2e/tsconfig.json' }] },
+      testEnvironment: 'node',
+      globalSetup: '<rootDir>/e2e/setup/global-setup.ts',
+      globalTeardown: '<rootDir>/e2e/setup/global-teardown.ts',
+    },
   ],
 };
 

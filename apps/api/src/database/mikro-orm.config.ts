@@ -8,6 +8,8 @@ import { ENTITIES } from './entities';
 export function ormConfig(clientUrl: string) {
   return defineConfig({
     clientUrl,
+    // Compiled code must load compiled migrations even when started from a test runner.
+    preferTs: __filename.endsWith('.ts'),
     entities: ENTITIES,
     extensions: [Migrator, SeedManager],
     // Sessions belong to connect-pg-simple; its table is made by a hand-written migration.
