@@ -22,6 +22,8 @@ export function ormConfig(clientUrl: string) {
       transactional: true,
       allOrNothing: true,
       snapshot: true,
+      // One snapshot whatever the database is called (app, test template, another server).
+      snapshotName: '.snapshot-evenset',
       emit: 'ts',
     },
     seeder: { path: join(__dirname, 'seeders'), defaultSeeder: 'DemoSeeder' },
