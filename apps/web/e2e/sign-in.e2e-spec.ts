@@ -2,7 +2,11 @@ import { baseUrl, navigationLinks, openBrowser, OpenBrowser, screenshot, signIn 
 
 // Demo accounts from the seed (apps/api/src/database/seeders/demo-people.ts).
 const DEMO_PASSWORD = 'evenset-demo-1';
-const NEW_INSPECTOR = { email: 'quinn.inspector@kestrel.example', name: 'Quinn Ferrand', password: 'plate-and-gauge-7' };
+const NEW_INSPECTOR = {
+  email: 'quinn.inspector@kestrel.example',
+  name: 'Quinn Ferrand',
+  password: 'plate-and-gauge-7',
+};
 
 jest.setTimeout(60_000);
 

@@ -8,7 +8,8 @@ export const SCREENSHOTS = join(ROOT, 'test-output', 'screenshots');
 
 export function baseUrl(): string {
   const url = process.env.EVENSET_BASE_URL;
-  if (!url) throw new Error('EVENSET_BASE_URL is not set: run the browser tests through jest --selectProjects browser.');
+  if (!url)
+    throw new Error('EVENSET_BASE_URL is not set: run the browser tests through jest --selectProjects browser.');
   return url;
 }
 
@@ -25,7 +26,15 @@ export async function openBrowser(viewport = { width: 1366, height: 860 }): Prom
     executablePath: '/usr/bin/chromium',
     headless: true,
     viewport,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {

@@ -1,0 +1,30 @@
+import StraightenOutlined from '@mui/icons-material/StraightenOutlined';
+import { navigationFor, type NavItem } from './navigation';
+
+const labels = (items: readonly NavItem[]): string[] => items.map((item) => item.label);
+
+describe('navigationFor', () => {
+  it('shows an admin Home and People', () => {
+    expect(labels(navigationFor(['admin']))).toEqual(['Home', 'People']);
+  });
+
+  it('hides People from everyone who is not an admin', () => {
+    for (const role of ['inspector', 'engineer', 'sales', 'service'] as const) {
+      expect(labels(navigationFor([role]))).toEqual(['Home']);
+    }
+  });
+
+  it('joins the pages of every role a person holds, each once and in menu order', () => {
+    expect(labels(navigationFor(['inspector', 'admin']))).toEqual(['Home', 'People']);
+  });
+
+  it('shows nothing to a person without roles (deny by default)', () => {
+    expect(navigationFor([])).toEqual([]);
+  });
+
+  it('keeps an item open to several roles for any one of them', () => {
+    const items: NavItem[] = [{ label: 'Sets', path: '/sets', icon: StraightenOutlined, roles: ['sales', 'service'] }];
+    expect(labels(navigationFor(['service'], items))).toEqual(['Sets']);
+    expect(labels(navigationFor(['inspector'], items))).toEqual([]);
+  });
+});

@@ -1,0 +1,12 @@
+import { ROLE_LABELS, ROLES, type Role } from '@evenset/contracts';
+
+/** Roles in the contract's fixed order, whatever order the server sent them in. */
+export function inRoleOrder(roles: readonly Role[]): Role[] {
+  return ROLES.filter((role) => roles.includes(role));
+}
+
+export function roleList(roles: readonly Role[]): string {
+  return inRoleOrder(roles)
+    .map((role) => ROLE_LABELS[role])
+    .join(' · ');
+}
