@@ -43,8 +43,8 @@ export class AppModule {
                 return id;
               },
               redact: ['req.headers.cookie', 'req.headers["x-csrf-token"]', 'res.headers["set-cookie"]'],
-              customLogLevel: (_req, res, error) =>
-                error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
+              // Refusals (4xx) are the product working as designed; only server faults are errors.
+              customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : 'info'),
             },
           }),
         }),

@@ -66,7 +66,7 @@ export async function startServer(env: Record<string, string> = {}): Promise<Sta
       DATABASE_URL: databaseUrl,
       WEB_DIST: join(ROOT, 'apps/web/dist'),
       SESSION_SECRET: randomBytes(32).toString('hex'),
-      LOG_LEVEL: 'warn',
+      LOG_LEVEL: 'error',
       ...env,
     },
     stdio: ['ignore', 'inherit', 'inherit'],
