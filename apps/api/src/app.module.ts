@@ -17,7 +17,11 @@ import { AppConfig } from './config/app-config.service';
 import { AppConfigModule } from './config/config.module';
 import { ormConfig } from './database/mikro-orm.config';
 import { HealthModule } from './health/health.module';
+import { InstrumentsModule } from './instruments/instruments.module';
+import { MastersModule } from './masters/masters.module';
+import { MaterialsModule } from './materials/materials.module';
 import { SessionModule } from './session/session.module';
+import { SpecsModule } from './specs/specs.module';
 import { UsersModule } from './users/users.module';
 
 const DEFAULT_WEB_DIST = join(__dirname, '../../web/dist');
@@ -69,6 +73,10 @@ export class AppModule {
         AuditModule,
         AuthModule,
         UsersModule,
+        MaterialsModule,
+        SpecsModule,
+        MastersModule,
+        InstrumentsModule,
         HealthModule,
       ],
       providers: [

@@ -4,3 +4,7 @@ export * from './list.schema';
 export * from './users.schema';
 export * from './auth.schema';
 export * from './health.schema';
+export * from './materials.schema';
+export * from './specs.schema';
+export * from './masters.schema';
+export * from './instruments.schema';

@@ -1,5 +1,20 @@
 import { AuditEntry } from '../audit/audit-entry.entity';
+import { Instrument } from '../instruments/instrument.entity';
+import { CalibrationCertificate } from '../masters/calibration-certificate.entity';
+import { MasterCalibration } from '../masters/master-calibration.entity';
+import { MasterGauge } from '../masters/master-gauge.entity';
+import { Material } from '../materials/material.entity';
+import { Spec } from '../specs/spec.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity, listed once so the app, the CLI and the tests see the same schema. */
-export const ENTITIES = [User, AuditEntry];
+export const ENTITIES = [
+  User,
+  AuditEntry,
+  Material,
+  Spec,
+  MasterGauge,
+  MasterCalibration,
+  CalibrationCertificate,
+  Instrument,
+];

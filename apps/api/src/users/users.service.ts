@@ -1,5 +1,4 @@
-import { EntityManager, QueryOrder, UniqueConstraintViolationException } from '@mikro-orm/postgresql';
-import type { FilterQuery } from '@mikro-orm/core';
+import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/postgresql';
 import { Injectable } from '@nestjs/common';
 import type {
   ChangeRolesInput,
@@ -12,10 +11,9 @@ import type {
 import { AuditService } from '../audit/audit.service';
 import { NotFoundException } from '../common/errors/domain.exception';
 import { hashPassword } from '../auth/password';
+import { listOptions, searchAny } from '../common/list-query';
 import { SelfLockoutException, UserEmailTakenException } from './users.exception';
 import { User } from './user.entity';
-
-const SORTABLE = new Set(['email', 'displayName', 'createdAt']);
 
 @Injectable()
 export class UsersService {
@@ -25,25 +23,11 @@ export class UsersService {
   ) {}
 
   async list(query: ListQuery): Promise<Page<UserView>> {
-    const [field, direction] = (query.sort ?? 'displayName:asc').split(':');
-    const orderBy = SORTABLE.has(field ?? '')
-      ? {
-          [field as string]: direction === 'desc' ? QueryOrder.DESC : QueryOrder.ASC,
-        }
-      : { displayName: QueryOrder.ASC };
-    const where: FilterQuery<User> = query.q
-      ? {
-          $or: [
-            { email: { $ilike: `%${escapeLike(query.q)}%` } },
-            { displayName: { $ilike: `%${escapeLike(query.q)}%` } },
-          ],
-        }
-      : {};
-    const [users, total] = await this.em.findAndCount(User, where, {
-      orderBy: [orderBy, { id: QueryOrder.ASC }],
-      limit: query.pageSize,
-      offset: query.page * query.pageSize,
-    });
+    const [users, total] = await this.em.findAndCount(
+      User,
+      searchAny<User>(query.q, ['email', 'displayName']),
+      listOptions(query, ['email', 'displayName', 'createdAt'], 'displayName'),
+    );
     return { items: users.map((u) => u.toView()), total };
   }
 
@@ -135,8 +119,4 @@ function summary(user: User): Record<string, unknown> {
     roles: [...user.roles],
     active: user.active,
   };
-}
-
-function escapeLike(text: string): string {
-  return text.replace(/[\\%_]/g, (c) => `\\${c}`);
 }

@@ -1,0 +1,14 @@
+import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { Module } from '@nestjs/common';
+import { CalibrationCertificate } from './calibration-certificate.entity';
+import { MasterCalibration } from './master-calibration.entity';
+import { MasterGauge } from './master-gauge.entity';
+import { MastersController } from './masters.controller';
+import { MastersService } from './masters.service';
+
+@Module({
+  imports: [MikroOrmModule.forFeature([MasterGauge, MasterCalibration, CalibrationCertificate])],
+  controllers: [MastersController],
+  providers: [MastersService],
+})
+export class MastersModule {}
