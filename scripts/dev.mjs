@@ -10,12 +10,35 @@ await runMain(async () => {
   const urls = await bootstrap();
   step('Dev servers: API on http://127.0.0.1:3000, web on http://127.0.0.1:5173 (Ctrl-C stops both)');
   const children = [
-    spawn(process.execPath, ['--watch', '--watch-path=apps/api/src', '--watch-path=packages', '-r', 'ts-node/register', '-r', 'tsconfig-paths/register', 'apps/api/src/main.ts'], {
-      cwd: ROOT,
+    spawn(
+      process.execPath,
+      [
+        '--watch',
+        '--watch-path=apps/api/src',
+        '--watch-path=packages',
+        '-r',
+        'ts-node/register',
+        '-r',
+        'tsconfig-paths/register',
+        'apps/api/src/main.ts',
+      ],
+      {
+        cwd: ROOT,
+        stdio: 'inherit',
+        env: {
+          ...process.env,
+          DATABASE_URL: urls.app,
+          SESSION_SECRET: localSecret('session'),
+          TS_NODE_PROJECT: 'apps/api/tsconfig.json',
+          TS_NODE_SWC: 'true',
+          TS_NODE_TRANSPILE_ONLY: 'true',
+        },
+      },
+    ),
+    spawn(process.execPath, [`${ROOT}/node_modules/vite/bin/vite.js`, '--host', '127.0.0.1'], {
+      cwd: `${ROOT}/apps/web`,
       stdio: 'inherit',
-      env: { ...process.env, DATABASE_URL: urls.app, SESSION_SECRET: localSecret('session'), TS_NODE_PROJECT: 'apps/api/tsconfig.json', TS_NODE_SWC: 'true', TS_NODE_TRANSPILE_ONLY: 'true' },
     }),
-    spawn(process.execPath, [`${ROOT}/node_modules/vite/bin/vite.js`, '--host', '127.0.0.1'], { cwd: `${ROOT}/apps/web`, stdio: 'inherit' }),
   ];
   const stop = (signal) => children.forEach((child) => child.kill(signal));
   process.on('SIGINT', stop);

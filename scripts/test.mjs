@@ -17,14 +17,23 @@ await runMain(async () => {
   run('npm', ['run', 'typecheck', '--silent'], { cwd: ROOT, advice: 'fix the type errors shown above.' });
 
   step(`Unit and API tests (${SUITES.join(', ')})`);
-  const unit = await runAsync(process.execPath, [JEST, '--selectProjects', ...SUITES, ...process.argv.slice(2)], { cwd: ROOT, env });
+  const unit = await runAsync(process.execPath, [JEST, '--selectProjects', ...SUITES, ...process.argv.slice(2)], {
+    cwd: ROOT,
+    env,
+  });
 
   ensureChromium();
   step('Browser tests (Debian chromium, headless, against the started app)');
-  const browser = await runAsync(process.execPath, [JEST, '--selectProjects', 'browser', '--runInBand'], { cwd: ROOT, env });
+  const browser = await runAsync(process.execPath, [JEST, '--selectProjects', 'browser', '--runInBand'], {
+    cwd: ROOT,
+    env,
+  });
 
   if (unit !== 0 || browser !== 0) {
-    throw new StepError(`Tests failed: ${[unit !== 0 && 'unit/API', browser !== 0 && 'browser'].filter(Boolean).join(' and ')}.`, 'read the failures above.');
+    throw new StepError(
+      `Tests failed: ${[unit !== 0 && 'unit/API', browser !== 0 && 'browser'].filter(Boolean).join(' and ')}.`,
+      'read the failures above.',
+    );
   }
   step('All tests passed');
 });

@@ -12,11 +12,18 @@ export function ensureChromium() {
     return;
   }
   if (process.getuid?.() !== 0) {
-    throw new StepError(`${CHROMIUM} is missing.`, 'install Debian\'s "chromium" package (sudo apt-get install -y chromium).');
+    throw new StepError(
+      `${CHROMIUM} is missing.`,
+      'install Debian\'s "chromium" package (sudo apt-get install -y chromium).',
+    );
   }
   info('installing Debian\'s "chromium" package (about a minute)…');
-  const advice = 'check that apt can reach Debian\'s package mirrors, then run the command again.';
+  const advice = "check that apt can reach Debian's package mirrors, then run the command again.";
   run('apt-get', ['update'], { advice, quiet: true });
-  run('apt-get', ['install', '-y', '--no-install-recommends', 'chromium'], { advice, quiet: true, env: { DEBIAN_FRONTEND: 'noninteractive' } });
+  run('apt-get', ['install', '-y', '--no-install-recommends', 'chromium'], {
+    advice,
+    quiet: true,
+    env: { DEBIAN_FRONTEND: 'noninteractive' },
+  });
   done('chromium installed');
 }

@@ -11,7 +11,9 @@ jest.setTimeout(120_000);
 const ROOT = join(__dirname, '../..');
 const bin = join('/usr/lib/postgresql', readdirSync('/usr/lib/postgresql').sort().pop() ?? '', 'bin');
 const asPostgres = (command: string, args: string[]) =>
-  process.getuid?.() === 0 ? execFileSync('runuser', ['-u', 'postgres', '--', command, ...args], { stdio: 'pipe' }) : execFileSync(command, args, { stdio: 'pipe' });
+  process.getuid?.() === 0
+    ? execFileSync('runuser', ['-u', 'postgres', '--', command, ...args], { stdio: 'pipe' })
+    : execFileSync(command, args, { stdio: 'pipe' });
 
 describe('DATABASE_URL pointing at another server', () => {
   const folder = mkdtempSync(join(tmpdir(), 'evenset-other-pg-'));
@@ -21,11 +23,21 @@ describe('DATABASE_URL pointing at another server', () => {
   beforeAll(() => {
     chmodSync(folder, 0o777);
     asPostgres(join(bin, 'initdb'), ['-D', data, '-U', 'postgres', '--auth=trust', '-E', 'UTF8']);
-    asPostgres(join(bin, 'pg_ctl'), ['-D', data, '-w', '-o', `-k ${folder} -p ${port} -c listen_addresses=127.0.0.1`, '-l', join(folder, 'log'), 'start']);
+    asPostgres(join(bin, 'pg_ctl'), [
+      '-D',
+      data,
+      '-w',
+      '-o',
+      `-k ${folder} -p ${port} -c listen_addresses=127.0.0.1`,
+      '-l',
+      join(folder, 'log'),
+      'start',
+    ]);
   });
 
   afterAll(() => {
-    if (existsSync(join(data, 'postmaster.pid'))) asPostgres(join(bin, 'pg_ctl'), ['-D', data, '-m', 'immediate', 'stop']);
+    if (existsSync(join(data, 'postmaster.pid')))
+      asPostgres(join(bin, 'pg_ctl'), ['-D', data, '-m', 'immediate', 'stop']);
     rmSync(folder, { recursive: true, force: true });
   });
 
@@ -41,8 +53,12 @@ describe('DATABASE_URL pointing at another server', () => {
     expect(result.stdout).not.toContain('54329');
     const client = new Client({ connectionString: url });
     await client.connect();
-    const tables = await client.query<{ table_name: string }>(`select table_name from information_schema.tables where table_schema = 'public' order by 1`);
+    const tables = await client.query<{ table_name: string }>(
+      `select table_name from information_schema.tables where table_schema = 'public' order by 1`,
+    );
     await client.end();
-    expect(tables.rows.map((r) => r.table_name)).toEqual(expect.arrayContaining(['app_user', 'audit_entry', 'session', 'schema_migration']));
+    expect(tables.rows.map((r) => r.table_name)).toEqual(
+      expect.arrayContaining(['app_user', 'audit_entry', 'session', 'schema_migration']),
+    );
   });
 });

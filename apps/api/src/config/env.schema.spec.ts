@@ -8,7 +8,9 @@ describe('validateEnv', () => {
   });
 
   it('names every bad variable', () => {
-    expect(() => validateEnv({ PORT: 'eighty', LOG_LEVEL: 'loud' })).toThrow(/DATABASE_URL[\s\S]*PORT|PORT[\s\S]*DATABASE_URL/);
+    expect(() => validateEnv({ PORT: 'eighty', LOG_LEVEL: 'loud' })).toThrow(
+      /DATABASE_URL[\s\S]*PORT|PORT[\s\S]*DATABASE_URL/,
+    );
     expect(() => validateEnv({ ...base, LOG_LEVEL: 'loud' })).toThrow(/LOG_LEVEL/);
   });
 

@@ -1,0 +1,39 @@
+#!/usr/bin/env node
+// Benchmarks (not part of `npm test`). Each area's benchmark is TypeScript: it is compiled with
+// the workspace's own TypeScript into node_modules/.cache/evenset-bench, then run with plain Node,
+// so no compiler sits in the measured processes. Add an area to AREAS to benchmark it.
+// Usage: npm run bench [-- <part of an area name>]
+import { spawnSync } from 'node:child_process';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const tsc = path.join(root, 'node_modules', 'typescript', 'bin', 'tsc');
+
+/** name: shown in the output; project: tsconfig that compiles the benchmark; entry: compiled file to run. */
+const AREAS = [
+  {
+    name: 'metrology: exact minimum-zone flatness vs a general LP solver',
+    project: 'packages/metrology/bench/tsconfig.json',
+    entry: 'node_modules/.cache/evenset-bench/metrology/bench/flatness.bench.js',
+  },
+];
+
+const filters = process.argv.slice(2);
+let failed = false;
+for (const area of AREAS) {
+  if (filters.length > 0 && !filters.some((f) => area.name.includes(f))) continue;
+  console.log(`\n=== ${area.name} ===\n`);
+  const build = spawnSync(process.execPath, [tsc, '-p', path.join(root, area.project)], {
+    cwd: root,
+    stdio: 'inherit',
+  });
+  if (build.status !== 0) {
+    console.error(`could not compile ${area.project}`);
+    failed = true;
+    continue;
+  }
+  const run = spawnSync(process.execPath, [path.join(root, area.entry)], { cwd: root, stdio: 'inherit' });
+  if (run.status !== 0) failed = true;
+}
+process.exitCode = failed ? 1 : 0;
