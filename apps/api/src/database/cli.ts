@@ -7,7 +7,9 @@ import { DemoSeeder } from './seeders/demo.seeder';
 async function main(command: string | undefined): Promise<void> {
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error('Set DATABASE_URL.');
-  const orm = await MikroORM.init({ ...ormConfig(url), debug: false });
+  const config = ormConfig(url);
+  // The snapshot belongs to `migration:create`; applying migrations must not rewrite the source tree.
+  const orm = await MikroORM.init({ ...config, migrations: { ...config.migrations, snapshot: false }, debug: false });
   try {
     if (command === 'migrate') {
       const applied = await orm.getMigrator().up();
