@@ -4,7 +4,7 @@ import type { Config } from 'jest';
 // tsconfig) for speed, and `npm run typecheck` does the type checking. Browser tests live in their own project and are run
 // after the app is built (scripts/test.mjs), so `npm test` can start the real server first.
 const tsJest = {
-  '^.+\\.tsx?$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json'}],
+  '^.+\\.tsx?$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json' }],
 };
 const workspaceSources = {
   '^@evenset/contracts$': '<rootDir>/../../packages/contracts/src/index.ts',
@@ -35,6 +35,7 @@ const config: Config = {
       moduleNameMapper: workspaceSources,
       testEnvironment: 'node',
       setupFiles: ['reflect-metadata'],
+      setupFilesAfterEnv: ['<rootDir>/test/setup/timeouts.ts'],
     },
     {
       displayName: 'scripts',
@@ -48,7 +49,7 @@ const config: Config = {
       rootDir: '<rootDir>/apps/web',
       testMatch: ['<rootDir>/src/**/*.spec.{ts,tsx}'],
       transform: {
-        '^.+\\.tsx?$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.spec.json'}],
+        '^.+\\.tsx?$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.spec.json' }],
       },
       moduleNameMapper: {
         ...workspaceSources,

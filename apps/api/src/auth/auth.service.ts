@@ -1,4 +1,4 @@
-import { EntityManager } from '@mikro-orm/postgresql';
+import { CreateRequestContext, EntityManager } from '@mikro-orm/postgresql';
 import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
 import type { SessionUser } from '@evenset/contracts';
 import { emailSchema, newPasswordSchema } from '@evenset/contracts';
@@ -43,12 +43,12 @@ export class AuthService implements OnApplicationBootstrap {
   }
 
   /** Creates the first admin from EVENSET_ADMIN_EMAIL / EVENSET_ADMIN_PASSWORD when none exists. */
+  @CreateRequestContext() // runs at start, outside any request's unit of work
   async onApplicationBootstrap(): Promise<void> {
     const email = this.config.get('EVENSET_ADMIN_EMAIL');
     const password = this.config.get('EVENSET_ADMIN_PASSWORD');
     if (!email || !password) return;
-    const em = this.em.fork();
-    const admins = await em.count(User, {
+    const admins = await this.em.count(User, {
       roles: { $contains: ['admin'] },
       active: true,
     });
