@@ -17,7 +17,9 @@ import { AppConfig } from './config/app-config.service';
 import { AppConfigModule } from './config/config.module';
 import { ormConfig } from './database/mikro-orm.config';
 import { HealthModule } from './health/health.module';
+import { InspectionsModule } from './inspections/inspections.module';
 import { InstrumentsModule } from './instruments/instruments.module';
+import { LotsModule } from './lots/lots.module';
 import { MastersModule } from './masters/masters.module';
 import { MaterialsModule } from './materials/materials.module';
 import { SessionModule } from './session/session.module';
@@ -77,6 +79,8 @@ export class AppModule {
         SpecsModule,
         MastersModule,
         InstrumentsModule,
+        LotsModule,
+        InspectionsModule,
         HealthModule,
       ],
       providers: [

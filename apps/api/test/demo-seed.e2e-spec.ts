@@ -42,6 +42,29 @@ describe('demo data', () => {
     expect(materials.body.total).toBe(7);
     const instruments = await engineer.agent.get('/api/instruments').query({ usable: 'true' }).expect(200);
     expect(instruments.body.total).toBe(2);
+
+    // The lots tell the story through the server's own results (brief, demo scenario).
+    const lots = await engineer.agent.get('/api/lots').query({ sort: 'lotNumber:asc' }).expect(200);
+    expect(
+      lots.body.items.map((l: { lotNumber: string; partCount: number }) => `${l.lotNumber} ${l.partCount}`),
+    ).toEqual(['L-2026-041 6', 'L-2026-044 4', 'L-2026-047 4']);
+    const lot041 = lots.body.items[0].id as string;
+    const rows = await engineer.agent.get(`/api/lots/${lot041}/parts`).expect(200);
+    expect(
+      Object.fromEntries(
+        rows.body.items.map((r: { serial: string; status: string; verdict: string }) => [
+          r.serial,
+          `${r.status} ${r.verdict}`,
+        ]),
+      ),
+    ).toEqual({
+      'RB40-0401': 'released conforms',
+      'RB40-0402': 'released conforms',
+      'RB40-0403': 'released guard-band',
+      'RB40-0404': 'rework does-not-conform',
+      'RB40-0405': 'scrap does-not-conform',
+      'RB40-0406': 'released conforms',
+    });
     // Seeding hashes the demo people's passwords (scrypt): slow on a busy machine.
-  }, 30_000);
+  }, 60_000);
 });

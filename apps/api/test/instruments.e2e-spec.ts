@@ -10,11 +10,12 @@ describe('instruments', () => {
   let inspector: Browser;
   const today = todayIso();
 
+  // Sign-ins hash with scrypt: slow while the API suites run in parallel.
   beforeAll(async () => {
     t = await startTestApp();
     engineer = await signInAs(t.app, ['engineer']);
     inspector = await signInAs(t.app, ['inspector']);
-  });
+  }, 30_000);
   afterAll(() => t.close());
 
   const send = (method: 'post' | 'put', path: string, body: object) =>

@@ -17,6 +17,7 @@ describe('master gauges', () => {
   let steelId: string;
   const today = todayIso();
 
+  // Sign-ins hash with scrypt: slow while the API suites run in parallel.
   beforeAll(async () => {
     t = await startTestApp();
     const em = t.app.get(EntityManager).fork();
@@ -24,7 +25,7 @@ describe('master gauges', () => {
     await em.flush();
     engineer = await signInAs(t.app, ['engineer']);
     inspector = await signInAs(t.app, ['inspector']);
-  });
+  }, 30_000);
   afterAll(() => t.close());
 
   const post = (path: string, body?: object) => engineer.agent.post(path).set(CSRF_HEADER, engineer.csrf).send(body);

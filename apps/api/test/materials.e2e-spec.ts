@@ -6,10 +6,11 @@ import { Browser, signInAs, startTestApp, TestApp } from './setup/test-app';
 describe('materials', () => {
   let t: TestApp;
   let engineer: Browser;
+  // Sign-ins hash with scrypt: slow while the API suites run in parallel.
   beforeAll(async () => {
     t = await startTestApp();
     engineer = await signInAs(t.app, ['engineer']);
-  });
+  }, 30_000);
   afterAll(() => t.close());
 
   const send = (method: 'post' | 'put', path: string, body: object) =>

@@ -15,7 +15,8 @@ describe('role matrix', () => {
     t = await startTestApp();
     routes = listRoutes(t.app);
     for (const role of ROLES) browsers.set(role, await signInAs(t.app, [role]));
-  });
+    // One scrypt sign-in per role: slow on a busy machine.
+  }, 30_000);
   afterAll(() => t.close());
 
   const call = (client: request.Agent | ReturnType<typeof request>, route: RouteInfo, csrf?: string) => {

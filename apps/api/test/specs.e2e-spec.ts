@@ -12,6 +12,7 @@ describe('part specs', () => {
   let inspector: Browser;
   let steelId: string;
 
+  // Sign-ins hash with scrypt: slow while the API suites run in parallel.
   beforeAll(async () => {
     t = await startTestApp();
     const em = t.app.get(EntityManager).fork();
@@ -19,7 +20,7 @@ describe('part specs', () => {
     await em.flush();
     engineer = await signInAs(t.app, ['engineer']);
     inspector = await signInAs(t.app, ['inspector']);
-  });
+  }, 30_000);
   afterAll(() => t.close());
 
   const post = (path: string, body?: object) => engineer.agent.post(path).set(CSRF_HEADER, engineer.csrf).send(body);
@@ -181,8 +182,14 @@ describe('part specs', () => {
     const created = await post('/api/specs', { partNumber: 'RB-41', definition: definition() }).expect(201);
     const id = created.body.id as string;
     await post(`/api/specs/${id}/revisions`).expect(409); // a draft is edited, not revised
+    expect(created.body.frozenExpansion).toBeNull();
     const released = await post(`/api/specs/${id}/release`).expect(200);
     expect(released.body).toMatchObject({ status: 'released', revision: 'A' });
+    // Release copies the material's coefficient and its source into the revision.
+    expect(released.body.frozenExpansion).toEqual({
+      expansionPerK: released.body.material.expansionPerK,
+      source: released.body.material.source,
+    });
     expect(released.body.releasedAt).toEqual(expect.any(String));
 
     const edit = await put(`/api/specs/${id}`, { definition: definition({ title: 'Changed' }) });

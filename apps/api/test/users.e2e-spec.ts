@@ -7,12 +7,13 @@ describe('people (admin)', () => {
   let t: TestApp;
   let admin: Browser;
   let adminId: string;
+  // Sign-ins hash with scrypt: slow while the API suites run in parallel.
   beforeAll(async () => {
     t = await startTestApp();
     const user = await givenUser(t.app, ['admin'], 'chief@test.example');
     adminId = user.id;
     admin = await signIn(t.app, user.email);
-  });
+  }, 30_000);
   afterAll(() => t.close());
 
   const post = (path: string, body?: object) => admin.agent.post(path).set(CSRF_HEADER, admin.csrf).send(body);

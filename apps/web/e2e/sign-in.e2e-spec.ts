@@ -2,6 +2,8 @@ import { baseUrl, navigationLinks, openBrowser, OpenBrowser, screenshot, signIn 
 
 // Demo accounts from the seed (apps/api/src/database/seeders/demo-people.ts).
 const DEMO_PASSWORD = 'evenset-demo-1';
+const INSPECTOR_MENU = ['Home', 'Bench', 'Lots', 'Specs', 'Masters', 'Instruments', 'Materials'];
+const ENGINEER_MENU = ['Home', 'Lots', 'Specs', 'Masters', 'Instruments', 'Materials'];
 const NEW_INSPECTOR = {
   email: 'quinn.inspector@kestrel.example',
   name: 'Quinn Ferrand',
@@ -34,7 +36,7 @@ describe('sign-in, roles and people (browser)', () => {
 
     await signIn(page, NEW_INSPECTOR.email, NEW_INSPECTOR.password);
     await page.getByText(NEW_INSPECTOR.name).first().waitFor();
-    expect(await navigationLinks(page)).toEqual(['Home']);
+    expect(await navigationLinks(page)).toEqual(INSPECTOR_MENU);
     await screenshot(page, 'inspector-home');
     // A page outside the role is refused, not shown.
     await page.goto(`${baseUrl()}/people`);
@@ -43,8 +45,8 @@ describe('sign-in, roles and people (browser)', () => {
 
   it.each([
     ['admin@kestrel.example', ['Home', 'People']],
-    ['engineer@kestrel.example', ['Home']],
-    ['inspector@kestrel.example', ['Home']],
+    ['engineer@kestrel.example', ENGINEER_MENU],
+    ['inspector@kestrel.example', INSPECTOR_MENU],
     ['sales@kestrel.example', ['Home']],
     ['service@kestrel.example', ['Home']],
   ])('%s sees only their own navigation', async (email, expected) => {

@@ -8,3 +8,5 @@ export * from './materials.schema';
 export * from './specs.schema';
 export * from './masters.schema';
 export * from './instruments.schema';
+export * from './lots.schema';
+export * from './inspections.schema';

@@ -204,6 +204,11 @@ export const specSchema = z.object({
   definition: specDefinitionSchema,
   /** The drift limit that applies, in mm: the spec's own or the default. */
   effectiveMasterDriftLimit: z.number(),
+  /**
+   * The part's expansion coefficient (1e-6/K) and its source, copied from the material at release
+   * so later edits of the materials table never change a released revision; null for a draft.
+   */
+  frozenExpansion: z.object({ expansionPerK: z.number(), source: z.string() }).nullable(),
   releasedAt: z.string().nullable(),
   createdAt: z.string(),
   updatedAt: z.string(),

@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable } from '@nestjs/common';
 import type { SessionUser } from '@evenset/contracts';
@@ -25,6 +26,28 @@ export class AuditService {
         actorName: actor?.displayName ?? 'system',
         createdAt: new Date(),
       }),
+    );
+  }
+
+  /**
+   * Inserts many entries at once, outside the unit of work, for bulk writes (a CSV import of
+   * thousands of inspections). Call it inside the transaction that makes the changes.
+   */
+  async recordMany(
+    em: EntityManager,
+    actor: Pick<SessionUser, 'id' | 'displayName'> | null,
+    entries: AuditRecord[],
+  ): Promise<void> {
+    if (!entries.length) return;
+    await em.insertMany(
+      AuditEntry,
+      entries.map((entry) => ({
+        ...entry,
+        id: randomUUID(),
+        actorId: actor?.id,
+        actorName: actor?.displayName ?? 'system',
+        createdAt: new Date(),
+      })),
     );
   }
 }

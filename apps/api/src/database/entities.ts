@@ -1,5 +1,12 @@
 import { AuditEntry } from '../audit/audit-entry.entity';
+import { BenchRun } from '../inspections/bench-run.entity';
+import { InspectionReading } from '../inspections/inspection-reading.entity';
+import { InspectionResult } from '../inspections/inspection-result.entity';
+import { Inspection } from '../inspections/inspection.entity';
 import { Instrument } from '../instruments/instrument.entity';
+import { Lot } from '../lots/lot.entity';
+import { PartDisposition } from '../lots/part-disposition.entity';
+import { Part } from '../lots/part.entity';
 import { CalibrationCertificate } from '../masters/calibration-certificate.entity';
 import { MasterCalibration } from '../masters/master-calibration.entity';
 import { MasterGauge } from '../masters/master-gauge.entity';
@@ -17,4 +24,11 @@ export const ENTITIES = [
   MasterCalibration,
   CalibrationCertificate,
   Instrument,
+  Lot,
+  Part,
+  PartDisposition,
+  BenchRun,
+  Inspection,
+  InspectionReading,
+  InspectionResult,
 ];

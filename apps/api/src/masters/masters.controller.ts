@@ -11,7 +11,7 @@ import {
   UseInterceptors,
 } from '@nestjs/common';
 import { ApiConsumes, ApiTags } from '@nestjs/swagger';
-import type { Master as MasterView, MasterDetail, Page, SessionUser } from '@evenset/contracts';
+import type { CalibrationRecorded, Master as MasterView, MasterDetail, Page, SessionUser } from '@evenset/contracts';
 import { Roles } from '../common/auth/access.decorators';
 import { CurrentUser } from '../common/auth/current-user.decorator';
 import { CertificateUploadInterceptor, type UploadedCertificate } from '../files/certificate-upload.interceptor';
@@ -70,7 +70,10 @@ export class MastersController {
     return this.masters.retire(actor, id, body.reason);
   }
 
-  /** Multipart: the calibration's fields and its certificate file in field `certificate`. */
+  /**
+   * Multipart: the calibration's fields and its certificate file in field `certificate`. A correction
+   * answers its impact report: the parts whose verdict changed when their heights were recomputed.
+   */
   @Post(':id/calibrations')
   @ApiConsumes('multipart/form-data')
   @UseInterceptors(CertificateUploadInterceptor)
@@ -79,7 +82,7 @@ export class MastersController {
     @Param() { id }: MasterIdDto,
     @Body() body: CalibrationFormDto,
     @UploadedFile() file: UploadedCertificate | undefined,
-  ): Promise<MasterDetail> {
+  ): Promise<CalibrationRecorded> {
     return this.masters.addCalibration(actor, id, body, file);
   }
 }

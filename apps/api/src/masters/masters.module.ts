@@ -1,5 +1,6 @@
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { Module } from '@nestjs/common';
+import { InspectionsModule } from '../inspections/inspections.module';
 import { CalibrationCertificate } from './calibration-certificate.entity';
 import { MasterCalibration } from './master-calibration.entity';
 import { MasterGauge } from './master-gauge.entity';
@@ -7,7 +8,7 @@ import { MastersController } from './masters.controller';
 import { MastersService } from './masters.service';
 
 @Module({
-  imports: [MikroOrmModule.forFeature([MasterGauge, MasterCalibration, CalibrationCertificate])],
+  imports: [MikroOrmModule.forFeature([MasterGauge, MasterCalibration, CalibrationCertificate]), InspectionsModule],
   controllers: [MastersController],
   providers: [MastersService],
 })

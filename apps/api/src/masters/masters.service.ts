@@ -4,6 +4,8 @@ import { Injectable } from '@nestjs/common';
 import type {
   ApiErrorDetail,
   CalibrationForm,
+  CalibrationRecorded,
+  CorrectionImpact,
   CreateMasterInput,
   GaugeListQuery,
   Master as MasterView,
@@ -20,6 +22,7 @@ import { toMm } from '../common/units/lengths';
 import { CERTIFICATE_FIELD, type UploadedCertificate } from '../files/certificate-upload.interceptor';
 import { detectCertificateType, safeFilename } from '../files/file-type';
 import { FileMissingException, FileTypeRefusedException } from '../files/files.exception';
+import { InspectionsService } from '../inspections/inspections.service';
 import { Material } from '../materials/material.entity';
 import { CalibrationCertificate } from './calibration-certificate.entity';
 import { currentOf } from './current-calibration';
@@ -42,6 +45,7 @@ export class MastersService {
   constructor(
     private readonly em: EntityManager,
     private readonly audit: AuditService,
+    private readonly inspections: InspectionsService,
   ) {}
 
   async list(query: GaugeListQuery): Promise<Page<MasterView>> {
@@ -109,13 +113,17 @@ export class MastersService {
     return view(master, todayIso());
   }
 
-  /** Records a calibration, or a correction superseding an earlier one; both stay on record. */
+  /**
+   * Records a calibration, or a correction superseding an earlier one; both stay on record. A
+   * correction recomputes, in the same transaction, every inspection measured against the
+   * superseded record and answers the parts whose verdict changes.
+   */
   async addCalibration(
     actor: SessionUser,
     id: string,
     form: CalibrationForm,
     file: UploadedCertificate | undefined,
-  ): Promise<MasterDetail> {
+  ): Promise<CalibrationRecorded> {
     if (!file) throw new FileMissingException(CERTIFICATE_FIELD);
     const contentType = detectCertificateType(file.buffer);
     if (!contentType) throw new FileTypeRefusedException(CERTIFICATE_FIELD);
@@ -166,13 +174,16 @@ export class MastersService {
       after: { ...calibrationSummary(calibration), sha256: certificate.sha256 },
       reason: form.reason,
     });
+    const impact: CorrectionImpact | null = supersedes
+      ? await this.inspections.recomputeForCorrection(actor, supersedes, calibration, form.reason ?? '')
+      : null;
     try {
       await this.em.flush();
     } catch (error) {
       if (error instanceof UniqueConstraintViolationException) throw new CalibrationAlreadySupersededException();
       throw error;
     }
-    return this.detail(master.id);
+    return { ...(await this.detail(master.id)), impact };
   }
 
   async certificate(id: string, calibrationId: string): Promise<CertificateFile> {

@@ -123,6 +123,16 @@ export class Spec extends BaseEntity {
   @Property({ type: 'jsonb' })
   plan!: MeasurementPlan;
 
+  /**
+   * The material's expansion coefficient (1e-6/K) and its source, copied at release: a released
+   * revision must not change when the materials table is edited later.
+   */
+  @Property({ type: new DecimalType('number'), precision: 6, scale: 2, nullable: true })
+  frozenExpansionPerK: number | null = null;
+
+  @Property({ type: 'text', nullable: true })
+  frozenExpansionSource: string | null = null;
+
   @Property({ type: 'timestamptz', nullable: true })
   releasedAt: Date | null = null;
 
@@ -145,6 +155,17 @@ export class Spec extends BaseEntity {
     spec.previous = identity.previous;
     spec.applyDefinition(definition, material);
     return spec;
+  }
+
+  /** Copies the material's coefficient into the revision, as it stands at release. */
+  freezeExpansion(): void {
+    this.frozenExpansionPerK = this.material.expansionPerK;
+    this.frozenExpansionSource = this.material.source;
+  }
+
+  /** The part's expansion coefficient, 1e-6/K: the frozen one once released. */
+  expansionPerK(): number {
+    return this.frozenExpansionPerK ?? this.material.expansionPerK;
   }
 
   /** Takes a definition given in its own unit, converting every length once to millimetres. */
@@ -222,6 +243,10 @@ export class Spec extends BaseEntity {
       material: this.material.toView(),
       definition: this.definition(),
       effectiveMasterDriftLimit: this.masterDriftLimitMm ?? DEFAULT_MASTER_DRIFT_LIMIT_MM,
+      frozenExpansion:
+        this.frozenExpansionPerK != null && this.frozenExpansionSource != null
+          ? { expansionPerK: this.frozenExpansionPerK, source: this.frozenExpansionSource }
+          : null,
       releasedAt: this.releasedAt?.toISOString() ?? null,
       createdAt: this.createdAt.toISOString(),
       updatedAt: this.updatedAt.toISOString(),

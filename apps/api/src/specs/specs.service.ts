@@ -102,12 +102,18 @@ export class SpecsService {
       spec.status = 'released';
       spec.releasedAt = new Date();
       spec.releasedById = actor.id;
+      spec.freezeExpansion();
       this.audit.record(actor, {
         action: 'spec.release',
         subjectType: 'spec',
         subjectId: spec.id,
         before: { status: 'draft' },
-        after: { status: 'released', revision: spec.revision },
+        after: {
+          status: 'released',
+          revision: spec.revision,
+          expansionPerK: spec.frozenExpansionPerK,
+          expansionSource: spec.frozenExpansionSource,
+        },
       });
     });
     return spec.toView();

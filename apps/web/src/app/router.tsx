@@ -1,5 +1,6 @@
-import { lazy, Suspense } from 'react';
-import { createBrowserRouter, Outlet, RouterProvider } from 'react-router-dom';
+import type { Role } from '@evenset/contracts';
+import { lazy, Suspense, type ReactNode } from 'react';
+import { createBrowserRouter, Outlet, RouterProvider, type RouteObject } from 'react-router-dom';
 import { RouteError } from '../components/errors/route-error';
 import { PageLoading } from '../components/page-loading';
 import { paths } from '../config/paths';
@@ -11,7 +12,24 @@ const SignInRoute = lazy(() => import('./routes/sign-in').then((m) => ({ default
 const AppLayoutRoute = lazy(() => import('./routes/app-layout').then((m) => ({ default: m.AppLayoutRoute })));
 const HomeRoute = lazy(() => import('./routes/home').then((m) => ({ default: m.HomeRoute })));
 const PeopleRoute = lazy(() => import('./routes/people').then((m) => ({ default: m.PeopleRoute })));
+const SpecsRoute = lazy(() => import('./routes/specs').then((m) => ({ default: m.SpecsRoute })));
+const SpecNewRoute = lazy(() => import('./routes/spec-new').then((m) => ({ default: m.SpecNewRoute })));
+const SpecDetailRoute = lazy(() => import('./routes/spec-detail').then((m) => ({ default: m.SpecDetailRoute })));
+const SpecEditRoute = lazy(() => import('./routes/spec-edit').then((m) => ({ default: m.SpecEditRoute })));
+const MaterialsRoute = lazy(() => import('./routes/materials').then((m) => ({ default: m.MaterialsRoute })));
+const MastersRoute = lazy(() => import('./routes/masters').then((m) => ({ default: m.MastersRoute })));
+const MasterDetailRoute = lazy(() => import('./routes/master-detail').then((m) => ({ default: m.MasterDetailRoute })));
+const InstrumentsRoute = lazy(() => import('./routes/instruments').then((m) => ({ default: m.InstrumentsRoute })));
+const BenchRoute = lazy(() => import('./routes/bench').then((m) => ({ default: m.BenchRoute })));
+const LotsRoute = lazy(() => import('./routes/lots').then((m) => ({ default: m.LotsRoute })));
+const LotReviewRoute = lazy(() => import('./routes/lot-review').then((m) => ({ default: m.LotReviewRoute })));
+const PartDetailRoute = lazy(() => import('./routes/part-detail').then((m) => ({ default: m.PartDetailRoute })));
 const NotFoundRoute = lazy(() => import('./routes/not-found').then((m) => ({ default: m.NotFoundRoute })));
+
+/** A page open only to the roles its path names. */
+function guarded(path: { path: string; roles: readonly Role[] }, page: ReactNode): RouteObject {
+  return { path: path.path, element: <RequireRoles roles={path.roles}>{page}</RequireRoles> };
+}
 
 const router = createBrowserRouter([
   {
@@ -34,22 +52,20 @@ const router = createBrowserRouter([
             // A failing page is replaced inside the frame; navigation keeps working.
             errorElement: <RouteError />,
             children: [
-              {
-                path: paths.home.path,
-                element: (
-                  <RequireRoles roles={paths.home.roles}>
-                    <HomeRoute />
-                  </RequireRoles>
-                ),
-              },
-              {
-                path: paths.people.path,
-                element: (
-                  <RequireRoles roles={paths.people.roles}>
-                    <PeopleRoute />
-                  </RequireRoles>
-                ),
-              },
+              guarded(paths.home, <HomeRoute />),
+              guarded(paths.people, <PeopleRoute />),
+              guarded(paths.specs, <SpecsRoute />),
+              guarded(paths.specNew, <SpecNewRoute />),
+              guarded(paths.spec, <SpecDetailRoute />),
+              guarded(paths.specEdit, <SpecEditRoute />),
+              guarded(paths.materials, <MaterialsRoute />),
+              guarded(paths.masters, <MastersRoute />),
+              guarded(paths.master, <MasterDetailRoute />),
+              guarded(paths.instruments, <InstrumentsRoute />),
+              guarded(paths.bench, <BenchRoute />),
+              guarded(paths.lots, <LotsRoute />),
+              guarded(paths.lot, <LotReviewRoute />),
+              guarded(paths.part, <PartDetailRoute />),
               { path: '*', element: <NotFoundRoute /> },
             ],
           },

@@ -32,6 +32,8 @@ interface AppDataGridProps<R extends GridValidRowModel> {
   /** Said when there are no rows at all: what to do first. */
   emptyState: { title: string; hint: string };
   csvFileName: string;
+  /** Opens a row's own page; rows then read as links (the key column should link too, for keyboards). */
+  onRowClick?: ((row: R) => void) | undefined;
 }
 
 /** The one DataGrid of the app: paging, sorting and search happen on the server. */
@@ -46,6 +48,7 @@ export function AppDataGrid<R extends GridValidRowModel>({
   searchLabel,
   emptyState,
   csvFileName,
+  onRowClick,
 }: AppDataGridProps<R>) {
   const [density, setDensity] = useStoredDensity();
   const overlay = error
@@ -83,7 +86,8 @@ export function AppDataGrid<R extends GridValidRowModel>({
           noRowsOverlay: overlay,
           loadingOverlay: { variant: 'linear-progress', noRowsVariant: 'skeleton' },
         }}
-        sx={{ border: 'none', flexGrow: 1 }}
+        onRowClick={onRowClick ? ({ row }) => onRowClick(row) : undefined}
+        sx={{ border: 'none', flexGrow: 1, ...(onRowClick ? { '& .MuiDataGrid-row': { cursor: 'pointer' } } : {}) }}
       />
     </Paper>
   );

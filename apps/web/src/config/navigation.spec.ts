@@ -10,12 +10,42 @@ describe('navigationFor', () => {
 
   it('hides People from everyone who is not an admin', () => {
     for (const role of ['inspector', 'engineer', 'sales', 'service'] as const) {
-      expect(labels(navigationFor([role]))).toEqual(['Home']);
+      expect(labels(navigationFor([role]))).not.toContain('People');
     }
   });
 
+  it('shows engineers and inspectors the specs, gauges and materials they may read', () => {
+    expect(labels(navigationFor(['inspector']))).toEqual([
+      'Home',
+      'Bench',
+      'Lots',
+      'Specs',
+      'Masters',
+      'Instruments',
+      'Materials',
+    ]);
+    expect(labels(navigationFor(['engineer']))).toEqual([
+      'Home',
+      'Lots',
+      'Specs',
+      'Masters',
+      'Instruments',
+      'Materials',
+    ]);
+    expect(labels(navigationFor(['sales']))).toEqual(['Home']);
+  });
+
   it('joins the pages of every role a person holds, each once and in menu order', () => {
-    expect(labels(navigationFor(['inspector', 'admin']))).toEqual(['Home', 'People']);
+    expect(labels(navigationFor(['inspector', 'admin']))).toEqual([
+      'Home',
+      'Bench',
+      'Lots',
+      'Specs',
+      'Masters',
+      'Instruments',
+      'Materials',
+      'People',
+    ]);
   });
 
   it('shows nothing to a person without roles (deny by default)', () => {

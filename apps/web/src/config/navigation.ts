@@ -1,6 +1,12 @@
 import type { Role } from '@evenset/contracts';
 import HomeOutlined from '@mui/icons-material/HomeOutlined';
+import Inventory2Outlined from '@mui/icons-material/Inventory2Outlined';
+import TableRestaurantOutlined from '@mui/icons-material/TableRestaurantOutlined';
 import PeopleAltOutlined from '@mui/icons-material/PeopleAltOutlined';
+import ArchitectureOutlined from '@mui/icons-material/ArchitectureOutlined';
+import ScienceOutlined from '@mui/icons-material/ScienceOutlined';
+import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
+import StraightenOutlined from '@mui/icons-material/StraightenOutlined';
 import type { SvgIconComponent } from '@mui/icons-material';
 import { paths } from './paths';
 
@@ -14,6 +20,12 @@ export interface NavItem {
 /** The side navigation, in order. Only pages that exist are listed. */
 export const navigation: readonly NavItem[] = [
   { label: 'Home', path: paths.home.path, icon: HomeOutlined, roles: paths.home.roles },
+  { label: 'Bench', path: paths.bench.path, icon: TableRestaurantOutlined, roles: paths.bench.roles },
+  { label: 'Lots', path: paths.lots.path, icon: Inventory2Outlined, roles: paths.lots.roles },
+  { label: 'Specs', path: paths.specs.path, icon: ArchitectureOutlined, roles: paths.specs.roles },
+  { label: 'Masters', path: paths.masters.path, icon: StraightenOutlined, roles: paths.masters.roles },
+  { label: 'Instruments', path: paths.instruments.path, icon: SpeedOutlined, roles: paths.instruments.roles },
+  { label: 'Materials', path: paths.materials.path, icon: ScienceOutlined, roles: paths.materials.roles },
   { label: 'People', path: paths.people.path, icon: PeopleAltOutlined, roles: paths.people.roles },
 ];
 

@@ -85,6 +85,68 @@ async function request(method: Method, path: string, body?: unknown, query?: Que
   return text === '' ? undefined : (JSON.parse(text) as unknown);
 }
 
+/**
+ * Sends a multipart form (e.g. a certificate file with its fields) and reports the share sent,
+ * 0 to 1, as it goes; fetch cannot report upload progress, so this one request uses XHR.
+ */
+export async function apiUpload<T>(
+  path: string,
+  form: FormData,
+  schema: ZodType<T>,
+  onProgress: (share: number) => void,
+): Promise<T> {
+  let answer = await sendForm(path, form, await currentCsrfToken(), onProgress);
+  if (answer.status === 403 && errorFromText(answer.status, answer.text).code === 'CSRF_INVALID') {
+    answer = await sendForm(path, form, await fetchCsrfToken(), onProgress);
+  }
+  if (answer.status >= 400) {
+    const error = errorFromText(answer.status, answer.text);
+    if (error.status === 401) onUnauthorized();
+    throw error;
+  }
+  return parseAnswer(schema, answer.text === '' ? undefined : (JSON.parse(answer.text) as unknown));
+}
+
+function sendForm(
+  path: string,
+  form: FormData,
+  token: string,
+  onProgress: (share: number) => void,
+): Promise<{ status: number; text: string }> {
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', `${API_BASE}${path}`);
+    xhr.withCredentials = true;
+    xhr.setRequestHeader('Accept', 'application/json');
+    xhr.setRequestHeader(CSRF_HEADER, token);
+    xhr.upload.onprogress = (event) => {
+      if (event.lengthComputable && event.total > 0) onProgress(event.loaded / event.total);
+    };
+    xhr.onload = () => resolve({ status: xhr.status, text: xhr.responseText });
+    xhr.onerror = () =>
+      reject(
+        new ApiError({
+          status: 0,
+          code: 'NETWORK_ERROR',
+          message: "The upload did not reach Evenset's server. Check the network connection, then try again.",
+        }),
+      );
+    xhr.send(form);
+  });
+}
+
+function errorFromText(status: number, text: string): ApiError {
+  let json: unknown;
+  try {
+    json = JSON.parse(text) as unknown;
+  } catch {
+    json = undefined;
+  }
+  const parsed = apiErrorSchema.safeParse(json);
+  if (parsed.success) return new ApiError({ status, ...parsed.data });
+  return new ApiError({ status, code: `HTTP_${status}`, message: fallbackMessage(status) });
+}
+
 async function currentCsrfToken(): Promise<string> {
   return csrfToken ?? fetchCsrfToken();
 }
@@ -132,18 +194,13 @@ function toSearch(query: QueryParams | undefined): string {
 }
 
 async function toApiError(response: Response): Promise<ApiError> {
-  const status = response.status;
-  const parsed = apiErrorSchema.safeParse(await readJson(response));
-  if (parsed.success) return new ApiError({ status, ...parsed.data });
-  return new ApiError({ status, code: `HTTP_${status}`, message: fallbackMessage(status) });
-}
-
-async function readJson(response: Response): Promise<unknown> {
+  let text = '';
   try {
-    return JSON.parse(await response.text()) as unknown;
+    text = await response.text();
   } catch {
-    return undefined;
+    // An unreadable body gets the fallback message for its status.
   }
+  return errorFromText(response.status, text);
 }
 
 // Used only when the server (or a proxy in front of it) answers without our error body.

@@ -7,6 +7,11 @@ interface ServerErrorMapping<T extends FieldValues> {
   fields: readonly Path<T>[];
   /** Refusals without details that still belong to one field, e.g. USER_EMAIL_TAKEN → email. */
   codes?: Readonly<Record<string, Path<T>>>;
+  /**
+   * Put each message on the exact path the server named (e.g. `definition.plan.stations.2.name`)
+   * rather than on the top-level field, for forms with nested fields and lists.
+   */
+  exactPaths?: boolean;
 }
 
 /**
@@ -16,9 +21,12 @@ interface ServerErrorMapping<T extends FieldValues> {
 export function applyServerErrors<T extends FieldValues>(
   error: unknown,
   setError: UseFormSetError<T>,
-  { fields, codes = {} }: ServerErrorMapping<T>,
+  { fields, codes = {}, exactPaths = false }: ServerErrorMapping<T>,
 ): void {
-  const fieldFor = (path: string): Path<T> | undefined => fields.find((field) => path.split('.')[0] === field);
+  const fieldFor = (path: string): Path<T> | undefined => {
+    const field = fields.find((name) => path.split('.')[0] === name);
+    return field && exactPaths ? (path as Path<T>) : field;
+  };
   if (error instanceof ApiError) {
     const unplaced = error.details.filter((detail) => {
       const field = fieldFor(detail.path);

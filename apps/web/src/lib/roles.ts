@@ -10,3 +10,8 @@ export function roleList(roles: readonly Role[]): string {
     .map((role) => ROLE_LABELS[role])
     .join(' · ');
 }
+
+/** True when a person holding `held` may use something open to `allowed` (one shared role is enough). */
+export function holdsAny(held: readonly Role[], allowed: readonly Role[]): boolean {
+  return held.some((role) => allowed.includes(role));
+}

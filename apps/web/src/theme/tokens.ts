@@ -41,3 +41,6 @@ export const status = {
 } as const;
 
 export const radius = 6;
+
+/** Figures that must line up in columns: lengths, coefficients, positions. */
+export const monoFontFamily = '"Roboto Mono", ui-monospace, "SFMono-Regular", Menlo, monospace';

@@ -23,7 +23,10 @@ export async function ensureSpec(em: EntityManager, seed: SpecSeed): Promise<Spe
     { ...seed.definition, materialId: material.id },
     material,
   );
-  if (seed.status !== 'draft') spec.releasedAt = new Date();
+  if (seed.status !== 'draft') {
+    spec.releasedAt = new Date();
+    spec.freezeExpansion();
+  }
   em.persist(spec);
   return spec;
 }

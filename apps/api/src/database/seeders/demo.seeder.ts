@@ -6,6 +6,7 @@ import { ensureMaterial } from '../factories/material.factory';
 import { ensureSpec } from '../factories/spec.factory';
 import { ensureUser } from '../factories/user.factory';
 import { demoInstruments, demoMasters } from './demo-gauges';
+import { seedDemoLots } from './demo-lots';
 import { DEMO_PEOPLE } from './demo-people';
 import { LR90_REV_A, PP6_REV_A, RB40_REV_A, RB40_REV_B } from './demo-specs';
 import { SHOP_MATERIALS, STEEL } from './shop-materials';
@@ -39,5 +40,6 @@ export class DemoSeeder extends Seeder {
     for (const master of demoMasters(steel)) await ensureMaster(em, master);
     for (const instrument of demoInstruments()) await ensureInstrument(em, instrument);
     await em.flush();
+    await seedDemoLots(em);
   }
 }

@@ -39,7 +39,7 @@ export function RoleCard({ role, pages }: { role: Role; pages: readonly NavItem[
         <Typography>{work}</Typography>
       </CardContent>
       {pages.length > 0 ? (
-        <CardActions sx={{ px: 2, pb: 2 }}>
+        <CardActions disableSpacing sx={{ px: 2, pb: 2, flexWrap: 'wrap', gap: 1 }}>
           {pages.map((page) => (
             <Button
               key={page.path}

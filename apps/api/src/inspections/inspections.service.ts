@@ -1,0 +1,509 @@
+import { EntityManager, UniqueConstraintViolationException } from '@mikro-orm/postgresql';
+import { randomUUID } from 'node:crypto';
+import { Injectable } from '@nestjs/common';
+import type {
+  CorrectionImpact,
+  CreateInspectionInput,
+  CreateRunInput,
+  EndRunInput,
+  Inspection as InspectionView,
+  Run as RunView,
+  SessionUser,
+  Verdict,
+} from '@evenset/contracts';
+import { AuditService, type AuditRecord } from '../audit/audit.service';
+import { NotFoundException, ValidationFailedException } from '../common/errors/domain.exception';
+import { gaugeStatus, todayIso } from '../common/gauges/gauge-status';
+import { toMm } from '../common/units/lengths';
+import { insertRows } from '../database/bulk-insert';
+import { Instrument } from '../instruments/instrument.entity';
+import { Lot } from '../lots/lot.entity';
+import { Part } from '../lots/part.entity';
+import { MasterCalibration } from '../masters/master-calibration.entity';
+import { MasterGauge } from '../masters/master-gauge.entity';
+import { DEFAULT_MASTER_DRIFT_LIMIT_MM } from '../specs/spec.entity';
+import { BenchRun } from './bench-run.entity';
+import { computeResult } from './compute-result';
+import { InspectionReading } from './inspection-reading.entity';
+import { InspectionResult } from './inspection-result.entity';
+import { Inspection } from './inspection.entity';
+import {
+  GaugeNotUsableException,
+  InspectionSupersedeException,
+  ReadingsRefusedException,
+  RunEndedException,
+} from './inspections.exception';
+import { matchReadings, planStations, type StationValue } from './measurement-plan';
+
+/** One part's readings ready to record (mm, plan order). */
+export interface PartReadings {
+  part: Part;
+  values: StationValue[];
+  supersedes?: Inspection;
+  reason?: string;
+}
+
+// Columns written in bulk by `record`, with their SQL types (as in the migration).
+const INSPECTION_COLUMNS = {
+  id: 'uuid',
+  created_at: 'timestamptz',
+  part_id: 'uuid',
+  run_id: 'uuid',
+  spec_id: 'uuid',
+  master_calibration_id: 'uuid',
+  instrument_id: 'uuid',
+  instrument_resolution_mm: 'numeric',
+  master_reading_mm: 'numeric',
+  master_temperature_c: 'numeric',
+  part_temperature_c: 'numeric',
+  part_expansion_per_k: 'numeric',
+  master_expansion_per_k: 'numeric',
+  inspector_id: 'uuid',
+  inspector_name: 'text',
+  supersedes_id: 'uuid',
+  reason: 'text',
+};
+const RESULT_COLUMNS = {
+  id: 'uuid',
+  created_at: 'timestamptz',
+  inspection_id: 'uuid',
+  reason: 'text',
+  master_calibration_id: 'uuid',
+  height_mm: 'numeric',
+  expanded_uncertainty_mm: 'numeric',
+  flatness_mm: 'numeric',
+  parallelism_mm: 'numeric',
+  runout_mm: 'numeric',
+  verdict: 'text',
+  computed: 'jsonb',
+};
+const READING_COLUMNS = {
+  id: 'uuid',
+  created_at: 'timestamptz',
+  inspection_id: 'uuid',
+  position: 'int',
+  station: 'text',
+  kind: 'text',
+  reading_mm: 'numeric',
+};
+
+/** What `record` wrote for one part. */
+export interface Recorded {
+  id: string;
+  part: Part;
+  verdict: Verdict;
+}
+
+/** The stored inputs of an inspection that its computation reads. */
+type StoredInputs = Pick<
+  Inspection,
+  | 'spec'
+  | 'masterReadingMm'
+  | 'instrumentResolutionMm'
+  | 'masterTemperatureC'
+  | 'partTemperatureC'
+  | 'partExpansionPerK'
+  | 'masterExpansionPerK'
+>;
+
+/** A result's columns computed from an inspection's stored inputs and a master calibration. */
+function resultRow(
+  inputs: StoredInputs,
+  values: StationValue[],
+  calibration: MasterCalibration,
+  reason: string,
+  at: Date,
+) {
+  const computed = computeResult({
+    spec: inputs.spec,
+    values,
+    masterSizeMm: calibration.calibratedSizeMm,
+    masterExpandedUncertaintyMm: calibration.expandedUncertaintyMm,
+    masterCoverageFactor: calibration.coverageFactor,
+    masterReadingMm: inputs.masterReadingMm,
+    resolutionMm: inputs.instrumentResolutionMm,
+    partTemperatureC: inputs.partTemperatureC,
+    masterTemperatureC: inputs.masterTemperatureC,
+    partExpansionPerK: inputs.partExpansionPerK,
+    masterExpansionPerK: inputs.masterExpansionPerK,
+  });
+  return {
+    id: randomUUID(),
+    reason,
+    heightMm: computed.height,
+    expandedUncertaintyMm: computed.expandedUncertainty,
+    flatnessMm: computed.flatness?.minimumZone ?? null,
+    parallelismMm: computed.parallelism?.value ?? null,
+    runoutMm: computed.runout ? Math.max(...computed.runout.circles.map((c) => c.circularRunout)) : null,
+    verdict: computed.verdict,
+    computed,
+    createdAt: at,
+  };
+}
+
+@Injectable()
+export class InspectionsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly audit: AuditService,
+  ) {}
+
+  async startRun(actor: SessionUser, input: CreateRunInput): Promise<RunView> {
+    const lot = await this.em.findOne(Lot, { id: input.lotId });
+    if (!lot) throw new ValidationFailedException([{ path: 'lotId', message: 'There is no such lot.' }]);
+    const today = todayIso();
+    const master = await this.em.findOne(MasterGauge, { id: input.masterId });
+    if (!master) throw new ValidationFailedException([{ path: 'masterId', message: 'There is no such master gauge.' }]);
+    const masterStatus = gaugeStatus(master.currentCalibration?.dueOn ?? null, today, master.retiredAt !== null);
+    if (!master.currentCalibration || !['in-service', 'due-soon'].includes(masterStatus))
+      throw new GaugeNotUsableException('master', master.code, masterStatus);
+    const instrument = await this.em.findOne(Instrument, { id: input.instrumentId });
+    if (!instrument)
+      throw new ValidationFailedException([{ path: 'instrumentId', message: 'There is no such instrument.' }]);
+    const instrumentStatus = gaugeStatus(instrument.calibrationDueOn, today, instrument.retiredAt !== null);
+    if (!['in-service', 'due-soon'].includes(instrumentStatus))
+      throw new GaugeNotUsableException('instrument', instrument.code, instrumentStatus);
+
+    const run = this.em.create(BenchRun, {
+      lot,
+      master,
+      masterCalibration: master.currentCalibration,
+      instrument,
+      inspectorId: actor.id,
+      inspectorName: actor.displayName,
+      // Rounded to the stored 0.01 °C, so a recomputation from the stored row gives the same result.
+      masterTemperatureC: roundCelsius(input.masterTemperature),
+      partTemperatureC: roundCelsius(input.partTemperature),
+      masterStartReadingMm: toMm(input.masterStartReading, input.unit),
+      driftLimitMm: lot.spec.masterDriftLimitMm ?? DEFAULT_MASTER_DRIFT_LIMIT_MM,
+      createdAt: new Date(),
+    });
+    this.em.persist(run);
+    this.audit.record(actor, {
+      action: 'run.start',
+      subjectType: 'run',
+      subjectId: run.id,
+      after: {
+        lot: lot.lotNumber,
+        master: master.code,
+        calibrationId: run.masterCalibration.id,
+        instrument: instrument.code,
+        masterTemperatureC: run.masterTemperatureC,
+        partTemperatureC: run.partTemperatureC,
+        masterStartReadingMm: run.masterStartReadingMm,
+      },
+    });
+    await this.em.flush();
+    return this.runView(run);
+  }
+
+  async endRun(actor: SessionUser, id: string, input: EndRunInput): Promise<RunView> {
+    const run = await this.getRun(id);
+    if (run.endedAt) throw new RunEndedException();
+    run.masterEndReadingMm = toMm(input.masterEndReading, input.unit);
+    run.endedAt = new Date();
+    this.audit.record(actor, {
+      action: 'run.end',
+      subjectType: 'run',
+      subjectId: run.id,
+      after: { masterEndReadingMm: run.masterEndReadingMm, driftMm: run.drift(), flagged: run.flagged() },
+    });
+    await this.em.flush();
+    return this.runView(run);
+  }
+
+  async viewRun(id: string): Promise<RunView> {
+    return this.runView(await this.getRun(id));
+  }
+
+  /** Records one part's inspection from readings in the body's unit, computed by the server. */
+  async inspect(actor: SessionUser, runId: string, input: CreateInspectionInput): Promise<InspectionView> {
+    const run = await this.openRun(runId);
+    const part = await this.em.findOne(Part, { id: input.partId, lot: run.lot });
+    if (!part)
+      throw new ValidationFailedException([
+        { path: 'partId', message: `There is no such part in lot ${run.lot.lotNumber}.` },
+      ]);
+    const { values, problems } = matchReadings(
+      planStations(run.lot.spec.plan),
+      input.readings.map((r) => ({ station: r.station, reading: toMm(r.reading, input.unit) })),
+    );
+    if (problems.length) throw new ReadingsRefusedException(problems);
+    const supersedes = input.supersedesId ? await this.supersedable(part, input.supersedesId) : undefined;
+    const [recorded] = await this.record(actor, run, [{ part, values, supersedes, reason: input.reason }]);
+    return (await this.views([await this.em.findOneOrFail(Inspection, { id: recorded!.id })]))[0]!;
+  }
+
+  /** A run that may still take inspections. */
+  async openRun(id: string): Promise<BenchRun> {
+    const run = await this.getRun(id);
+    if (run.endedAt) throw new RunEndedException();
+    return run;
+  }
+
+  /**
+   * Computes and stores the inspections of one run in one transaction: inspections, their readings,
+   * first results and audit entries, all or none. Written with bulk inserts rather than the unit of
+   * work, so a CSV of 100,000 readings stays within seconds.
+   */
+  async record(actor: SessionUser, run: BenchRun, parts: PartReadings[]): Promise<Recorded[]> {
+    const spec = run.lot.spec;
+    const calibration = run.masterCalibration;
+    const now = new Date();
+    const inspections: Record<string, unknown>[] = [];
+    const results: Record<string, unknown>[] = [];
+    const readings: Record<string, unknown>[] = [];
+    const audits: AuditRecord[] = [];
+    const recorded: Recorded[] = [];
+    for (const { part, values, supersedes, reason } of parts) {
+      const inputs = {
+        spec,
+        masterReadingMm: run.masterStartReadingMm,
+        instrumentResolutionMm: run.instrument.resolutionMm,
+        masterTemperatureC: run.masterTemperatureC,
+        partTemperatureC: run.partTemperatureC,
+        partExpansionPerK: spec.expansionPerK(),
+        masterExpansionPerK: run.master.material.expansionPerK,
+      };
+      const id = randomUUID();
+      inspections.push({
+        id,
+        created_at: now,
+        part_id: part.id,
+        run_id: run.id,
+        spec_id: spec.id,
+        master_calibration_id: calibration.id,
+        instrument_id: run.instrument.id,
+        instrument_resolution_mm: inputs.instrumentResolutionMm,
+        master_reading_mm: inputs.masterReadingMm,
+        master_temperature_c: inputs.masterTemperatureC,
+        part_temperature_c: inputs.partTemperatureC,
+        part_expansion_per_k: inputs.partExpansionPerK,
+        master_expansion_per_k: inputs.masterExpansionPerK,
+        inspector_id: actor.id,
+        inspector_name: actor.displayName,
+        supersedes_id: supersedes?.id ?? null,
+        reason: reason ?? null,
+      });
+      const result = resultRow(inputs, values, calibration, 'inspection', now);
+      results.push({
+        id: result.id,
+        created_at: now,
+        inspection_id: id,
+        reason: result.reason,
+        master_calibration_id: calibration.id,
+        height_mm: result.heightMm,
+        expanded_uncertainty_mm: result.expandedUncertaintyMm,
+        flatness_mm: result.flatnessMm,
+        parallelism_mm: result.parallelismMm,
+        runout_mm: result.runoutMm,
+        verdict: result.verdict,
+        computed: result.computed,
+      });
+      values.forEach((v, position) =>
+        readings.push({
+          id: randomUUID(),
+          created_at: now,
+          inspection_id: id,
+          position,
+          station: v.name,
+          kind: v.kind,
+          reading_mm: v.reading,
+        }),
+      );
+      audits.push({
+        action: supersedes ? 'inspection.correct' : 'inspection.create',
+        subjectType: 'inspection',
+        subjectId: id,
+        after: {
+          part: part.serial,
+          run: run.id,
+          readings: values.length,
+          heightMm: result.heightMm,
+          verdict: result.verdict,
+          supersedes: supersedes?.id,
+        },
+        reason,
+      });
+      recorded.push({ id, part, verdict: result.verdict });
+    }
+    await this.em.transactional(async (em) => {
+      try {
+        await insertRows(em, 'inspection', INSPECTION_COLUMNS, inspections);
+      } catch (error) {
+        if (error instanceof UniqueConstraintViolationException)
+          throw new InspectionSupersedeException('That inspection has already been corrected; correct the newest one.');
+        throw error;
+      }
+      await insertRows(em, 'inspection_result', RESULT_COLUMNS, results);
+      await insertRows(em, 'inspection_reading', READING_COLUMNS, readings);
+      await this.audit.recordMany(em, actor, audits);
+    });
+    return recorded;
+  }
+
+  /**
+   * After a master calibration is corrected: every inspection whose result in force used the
+   * superseded calibration gets a new result computed with the correcting one (appended, never
+   * rewritten). Runs in the caller's unit of work; answers the verdicts that change.
+   */
+  async recomputeForCorrection(
+    actor: SessionUser,
+    superseded: MasterCalibration,
+    correcting: MasterCalibration,
+    reason: string,
+  ): Promise<CorrectionImpact> {
+    const candidates = await this.em.find(
+      InspectionResult,
+      { masterCalibration: superseded },
+      { populate: ['inspection', 'inspection.part', 'inspection.part.lot', 'inspection.spec'] },
+    );
+    const inspections = [...new Map(candidates.map((r) => [r.inspection.id, r.inspection])).values()];
+    const latest = await this.latestResults(inspections.map((i) => i.id));
+    const readings = await this.readingsOf(inspections.map((i) => i.id));
+    const impact: CorrectionImpact = { recomputed: 0, changed: [] };
+    for (const inspection of inspections) {
+      const before = latest.get(inspection.id);
+      if (!before || before.masterCalibration.id !== superseded.id) continue;
+      const values = matchReadings(
+        planStations(inspection.spec.plan),
+        (readings.get(inspection.id) ?? []).map((r) => ({ station: r.station, reading: r.readingMm })),
+      ).values;
+      const after = this.em.create(InspectionResult, {
+        ...resultRow(inspection, values, correcting, `master calibration corrected: ${reason}`, new Date()),
+        inspection,
+        masterCalibration: correcting,
+      });
+      this.em.persist(after);
+      impact.recomputed += 1;
+      this.audit.record(actor, {
+        action: 'inspection.recompute',
+        subjectType: 'inspection',
+        subjectId: inspection.id,
+        before: { heightMm: before.heightMm, verdict: before.verdict, calibrationId: superseded.id },
+        after: { heightMm: after.heightMm, verdict: after.verdict, calibrationId: correcting.id },
+        reason,
+      });
+      if (after.verdict !== before.verdict)
+        impact.changed.push({
+          partId: inspection.part.id,
+          serial: inspection.part.serial,
+          lotNumber: inspection.part.lot.lotNumber,
+          inspectionId: inspection.id,
+          heightBefore: before.heightMm,
+          heightAfter: after.heightMm,
+          before: before.verdict,
+          after: after.verdict,
+        });
+    }
+    return impact;
+  }
+
+  /** Full views of inspections (readings, every result, supersession marks, run flag). */
+  async views(inspections: Inspection[]): Promise<InspectionView[]> {
+    if (!inspections.length) return [];
+    const ids = inspections.map((i) => i.id);
+    await this.em.populate(inspections, ['part', 'run']);
+    const readings = await this.readingsOf(ids);
+    const results = await this.em.find(
+      InspectionResult,
+      { inspection: { $in: ids } },
+      { orderBy: { createdAt: 'desc', id: 'asc' } },
+    );
+    const correctedBy = new Map(
+      (await this.em.find(Inspection, { supersedes: { $in: ids } })).map((c) => [c.supersedes!.id, c.id]),
+    );
+    return inspections.map((i) => {
+      const own = results.filter((r) => r.inspection.id === i.id).map((r) => r.toView());
+      return {
+        id: i.id,
+        partId: i.part.id,
+        serial: i.part.serial,
+        runId: i.run.id,
+        specId: i.spec.id,
+        masterCalibrationId: i.masterCalibration.id,
+        instrumentId: i.instrumentId,
+        instrumentResolution: i.instrumentResolutionMm,
+        masterTemperature: i.masterTemperatureC,
+        partTemperature: i.partTemperatureC,
+        partExpansionPerK: i.partExpansionPerK,
+        masterExpansionPerK: i.masterExpansionPerK,
+        inspector: i.inspectorName,
+        runFlagged: i.run.flagged(),
+        supersedesId: i.supersedes?.id ?? null,
+        supersededById: correctedBy.get(i.id) ?? null,
+        reason: i.reason,
+        readings: (readings.get(i.id) ?? []).map((r) => ({ station: r.station, kind: r.kind, reading: r.readingMm })),
+        result: own[0]!,
+        results: own,
+        createdAt: i.createdAt.toISOString(),
+      };
+    });
+  }
+
+  /** The result in force (newest) of each inspection. */
+  async latestResults(inspectionIds: string[]): Promise<Map<string, InspectionResult>> {
+    const results = await this.em.find(
+      InspectionResult,
+      { inspection: { $in: inspectionIds } },
+      { orderBy: { createdAt: 'asc', id: 'asc' } },
+    );
+    return new Map(results.map((r) => [r.inspection.id, r]));
+  }
+
+  private async readingsOf(inspectionIds: string[]): Promise<Map<string, InspectionReading[]>> {
+    const rows = await this.em.find(
+      InspectionReading,
+      { inspection: { $in: inspectionIds } },
+      { orderBy: { position: 'asc' } },
+    );
+    const byInspection = new Map<string, InspectionReading[]>();
+    for (const row of rows) {
+      const list = byInspection.get(row.inspection.id) ?? [];
+      list.push(row);
+      byInspection.set(row.inspection.id, list);
+    }
+    return byInspection;
+  }
+
+  /** The inspection a correction may supersede: the same part's, not corrected already. */
+  async supersedable(part: Part, id: string): Promise<Inspection> {
+    const old = await this.em.findOne(Inspection, { id, part });
+    if (!old) throw new InspectionSupersedeException(`There is no such inspection of part ${part.serial}.`);
+    if (await this.em.count(Inspection, { supersedes: old }))
+      throw new InspectionSupersedeException('That inspection has already been corrected; correct the newest one.');
+    return old;
+  }
+
+  private async getRun(id: string): Promise<BenchRun> {
+    const run = await this.em.findOne(BenchRun, { id });
+    if (!run) throw new NotFoundException('This run');
+    return run;
+  }
+
+  private async runView(run: BenchRun): Promise<RunView> {
+    const spec = run.lot.spec;
+    return {
+      id: run.id,
+      lot: { id: run.lot.id, lotNumber: run.lot.lotNumber },
+      spec: { id: spec.id, partNumber: spec.partNumber, revision: spec.revision },
+      master: { id: run.master.id, code: run.master.code, calibrationId: run.masterCalibration.id },
+      instrument: { id: run.instrument.id, code: run.instrument.code, resolution: run.instrument.resolutionMm },
+      inspector: run.inspectorName,
+      masterTemperature: run.masterTemperatureC,
+      partTemperature: run.partTemperatureC,
+      masterStartReading: run.masterStartReadingMm,
+      masterEndReading: run.masterEndReadingMm,
+      drift: run.drift(),
+      driftLimit: run.driftLimitMm,
+      flagged: run.flagged(),
+      endedAt: run.endedAt?.toISOString() ?? null,
+      inspections: await this.em.count(Inspection, { run }),
+      createdAt: run.createdAt.toISOString(),
+    };
+  }
+}
+
+function roundCelsius(value: number): number {
+  return Math.round(value * 100) / 100;
+}

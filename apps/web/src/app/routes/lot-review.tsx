@@ -1,0 +1,43 @@
+import Stack from '@mui/material/Stack';
+import { useParams } from 'react-router-dom';
+import { BackLink } from '../../components/back-link';
+import { SectionCard } from '../../components/display/section-card';
+import { LoadFailed } from '../../components/load-failed';
+import { PageHeader } from '../../components/page-header';
+import { PageLoading } from '../../components/page-loading';
+import { paths } from '../../config/paths';
+import { useSignedInUser } from '../../features/auth/hooks/use-signed-in-user';
+import { useLot, useLotParts } from '../../features/lots/api/get-lot';
+import { LotHeightsChart } from '../../features/lots/components/lot-heights-chart';
+import { LotSummary } from '../../features/lots/components/lot-summary';
+import { PartsGrid } from '../../features/lots/components/parts-grid';
+
+const ALL_PARTS = { page: 0, pageSize: 500, sort: 'serial:asc' } as const;
+
+export function LotReviewRoute() {
+  const { lotId = '' } = useParams();
+  const { displayUnit } = useSignedInUser();
+  const { data: lot, error, mutate } = useLot(lotId);
+  const chartParts = useLotParts(lotId, ALL_PARTS);
+
+  if (error) return <LoadFailed what="lot" error={error} onRetry={() => void mutate()} />;
+  if (!lot) return <PageLoading />;
+  return (
+    <>
+      <BackLink to={paths.lots.getHref()} label="All lots" />
+      <PageHeader title={`Lot review — ${lot.lotNumber}`} description={lot.notes ?? undefined} />
+      <Stack spacing={3}>
+        <SectionCard title="Lot">
+          <LotSummary lot={lot} unit={displayUnit} />
+        </SectionCard>
+        <SectionCard
+          title="Heights against the band"
+          description="Each part's height with its expanded uncertainty U (k = 2) as an error bar."
+        >
+          <LotHeightsChart spec={lot.spec} parts={chartParts.data?.items ?? []} unit={displayUnit} />
+        </SectionCard>
+        <PartsGrid lotId={lot.id} unit={displayUnit} />
+      </Stack>
+    </>
+  );
+}

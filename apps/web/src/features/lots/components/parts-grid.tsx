@@ -1,0 +1,92 @@
+import type { DisplayUnit, PartRow } from '@evenset/contracts';
+import FlagOutlined from '@mui/icons-material/FlagOutlined';
+import type { GridColDef } from '@mui/x-data-grid';
+import { useMemo } from 'react';
+import { useNavigate } from 'react-router-dom';
+import { AppDataGrid } from '../../../components/app-data-grid';
+import { lengthColumn } from '../../../components/data-grid/length-column';
+import { linkColumn } from '../../../components/data-grid/link-column';
+import { useGridListQuery } from '../../../components/data-grid/use-grid-list-query';
+import { StatusLabel } from '../../../components/display/status-label';
+import {
+  PART_STATUS_LABELS,
+  PartStatusLabel,
+  VerdictLabel,
+  verdictText,
+} from '../../../components/display/verdict-label';
+import { paths } from '../../../config/paths';
+import { useLotParts } from '../api/get-lot';
+
+function partColumns(unit: DisplayUnit): GridColDef<PartRow>[] {
+  const sortable = { sortable: true };
+  // Six figures columns side by side: narrower than the default so status stays in view at desk width.
+  const narrow = (column: GridColDef<PartRow>): GridColDef<PartRow> => ({ ...column, width: 118 });
+  return [
+    linkColumn<PartRow>({ field: 'serial', headerName: 'Serial', width: 130 }, (row) => paths.part.getHref(row.id)),
+    narrow(lengthColumn<PartRow>('height', 'Height', unit, (row) => row.height, { level: 'fine', ...sortable })),
+    narrow(lengthColumn<PartRow>('flatness', 'Flatness', unit, (row) => row.flatness, { level: 'fine', ...sortable })),
+    narrow(
+      lengthColumn<PartRow>('parallelism', 'Parallelism', unit, (row) => row.parallelism, {
+        level: 'fine',
+        ...sortable,
+      }),
+    ),
+    narrow(lengthColumn<PartRow>('runout', 'Runout', unit, (row) => row.runout, { level: 'fine', ...sortable })),
+    narrow(
+      lengthColumn<PartRow>('expandedUncertainty', 'U', unit, (row) => row.expandedUncertainty, {
+        small: true,
+        ...sortable,
+      }),
+    ),
+    {
+      field: 'verdict',
+      headerName: 'Verdict',
+      width: 170,
+      sortable: false,
+      valueGetter: (_value, row) => (row.verdict ? verdictText(row.verdict) : '—'),
+      renderCell: ({ row }) => (row.verdict ? <VerdictLabel verdict={row.verdict} /> : '—'),
+    },
+    {
+      field: 'runFlagged',
+      headerName: 'Run',
+      width: 120,
+      sortable: false,
+      valueGetter: (flagged: boolean) => (flagged ? 'Drift flag' : ''),
+      renderCell: ({ row }) =>
+        row.runFlagged ? <StatusLabel icon={FlagOutlined} label="Drift flag" tone="warning" /> : null,
+    },
+    {
+      field: 'status',
+      headerName: 'Status',
+      width: 190,
+      valueGetter: (status: PartRow['status']) => PART_STATUS_LABELS[status],
+      renderCell: ({ row }) => <PartStatusLabel status={row.status} />,
+    },
+  ];
+}
+
+/** A lot's parts with their current results; a row opens the part. */
+export function PartsGrid({ lotId, unit }: { lotId: string; unit: DisplayUnit }) {
+  const navigate = useNavigate();
+  const list = useGridListQuery([{ field: 'serial', sort: 'asc' }]);
+  const { data, error, isLoading, isValidating, mutate } = useLotParts(lotId, list.query);
+  const columns = useMemo(() => partColumns(unit), [unit]);
+  return (
+    <AppDataGrid
+      label="Parts"
+      columns={columns}
+      page={data}
+      loading={isLoading || isValidating}
+      error={error}
+      onRetry={() => void mutate()}
+      list={list}
+      searchLabel="Search serials"
+      emptyState={{
+        title: 'No parts in this lot yet',
+        hint: 'An engineer registers the serials when creating the lot.',
+      }}
+      csvFileName="evenset-lot-parts"
+      onRowClick={(row) => void navigate(paths.part.getHref(row.id))}
+    />
+  );
+}
