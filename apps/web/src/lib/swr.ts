@@ -1,4 +1,4 @@
-import useSWR, { type SWRConfiguration, type SWRResponse } from 'swr';
+import useSWR, { useSWRConfig, type SWRConfiguration, type SWRResponse } from 'swr';
 import type { ZodType } from 'zod';
 import { ApiError, apiGet, type QueryParams } from './api-client';
 
@@ -16,8 +16,17 @@ export function apiKey<T>(path: string, schema: ZodType<T>, query?: QueryParams)
   return { path, schema, query };
 }
 
-export function isApiKeyFor(path: string, key: unknown): boolean {
-  return typeof key === 'object' && key !== null && 'path' in key && key.path === path;
+/** True for every cached answer at or below one of `paths` (a list and its items' pages). */
+function isApiKeyUnder(paths: readonly string[], key: unknown): boolean {
+  if (typeof key !== 'object' || key === null || !('path' in key) || typeof key.path !== 'string') return false;
+  const keyPath = key.path;
+  return paths.some((path) => keyPath === path || keyPath.startsWith(`${path}/`));
+}
+
+/** Marks stale every cached answer at or below `paths`, after a change there. */
+export function useRevalidateUnder(...paths: string[]): () => Promise<unknown> {
+  const { mutate } = useSWRConfig();
+  return () => mutate((key) => isApiKeyUnder(paths, key));
 }
 
 export function swrFetcher<T>(key: ApiKey<T>): Promise<T> {

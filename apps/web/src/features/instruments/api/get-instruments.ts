@@ -1,6 +1,5 @@
 import { instrumentSchema, pageOf, type Instrument, type ListQuery, type Page } from '@evenset/contracts';
-import { useSWRConfig } from 'swr';
-import { apiKey, isApiKeyFor, useApi } from '../../../lib/swr';
+import { apiKey, useApi, useRevalidateUnder } from '../../../lib/swr';
 
 const INSTRUMENTS_PATH = '/instruments';
 const instrumentsPageSchema = pageOf(instrumentSchema);
@@ -10,6 +9,5 @@ export function useInstruments(query: ListQuery) {
 }
 
 export function useRevalidateInstruments(): () => Promise<unknown> {
-  const { mutate } = useSWRConfig();
-  return () => mutate((key) => isApiKeyFor(INSTRUMENTS_PATH, key));
+  return useRevalidateUnder(INSTRUMENTS_PATH);
 }

@@ -1,6 +1,5 @@
 import { lotSchema, pageOf, type ListQuery, type Lot, type Page } from '@evenset/contracts';
-import { useSWRConfig } from 'swr';
-import { apiKey, useApi } from '../../../lib/swr';
+import { apiKey, useApi, useRevalidateUnder } from '../../../lib/swr';
 
 export const LOTS_PATH = '/lots';
 export const PARTS_PATH = '/parts';
@@ -12,14 +11,5 @@ export function useLots(query: ListQuery) {
 
 /** After a lot, part or inspection changes, every lot page and list is stale. */
 export function useRevalidateLots(): () => Promise<unknown> {
-  const { mutate } = useSWRConfig();
-  return () =>
-    mutate(
-      (key) =>
-        typeof key === 'object' &&
-        key !== null &&
-        'path' in key &&
-        typeof key.path === 'string' &&
-        (key.path.startsWith(LOTS_PATH) || key.path.startsWith(PARTS_PATH)),
-    );
+  return useRevalidateUnder(LOTS_PATH, PARTS_PATH);
 }

@@ -1,6 +1,5 @@
 import { masterSchema, pageOf, type ListQuery, type Master, type Page } from '@evenset/contracts';
-import { useSWRConfig } from 'swr';
-import { apiKey, useApi } from '../../../lib/swr';
+import { apiKey, useApi, useRevalidateUnder } from '../../../lib/swr';
 
 export const MASTERS_PATH = '/masters';
 const mastersPageSchema = pageOf(masterSchema);
@@ -11,14 +10,5 @@ export function useMasters(query: ListQuery) {
 
 /** After any change to a master, its page and every page of the list are stale. */
 export function useRevalidateMasters(): () => Promise<unknown> {
-  const { mutate } = useSWRConfig();
-  return () =>
-    mutate(
-      (key) =>
-        typeof key === 'object' &&
-        key !== null &&
-        'path' in key &&
-        typeof key.path === 'string' &&
-        key.path.startsWith(MASTERS_PATH),
-    );
+  return useRevalidateUnder(MASTERS_PATH);
 }

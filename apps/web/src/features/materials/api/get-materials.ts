@@ -1,6 +1,5 @@
 import { materialSchema, pageOf, type ListQuery, type Material, type Page } from '@evenset/contracts';
-import { useSWRConfig } from 'swr';
-import { apiKey, isApiKeyFor, useApi } from '../../../lib/swr';
+import { apiKey, useApi, useRevalidateUnder } from '../../../lib/swr';
 
 const MATERIALS_PATH = '/materials';
 const materialsPageSchema = pageOf(materialSchema);
@@ -13,6 +12,5 @@ export function useMaterials(query: ListQuery) {
 }
 
 export function useRevalidateMaterials(): () => Promise<unknown> {
-  const { mutate } = useSWRConfig();
-  return () => mutate((key) => isApiKeyFor(MATERIALS_PATH, key));
+  return useRevalidateUnder(MATERIALS_PATH);
 }

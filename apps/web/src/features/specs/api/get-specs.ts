@@ -1,6 +1,5 @@
 import { pageOf, specSchema, type ListQuery, type Page, type Spec } from '@evenset/contracts';
-import { useSWRConfig } from 'swr';
-import { apiKey, useApi } from '../../../lib/swr';
+import { apiKey, useApi, useRevalidateUnder } from '../../../lib/swr';
 
 export const SPECS_PATH = '/specs';
 const specsPageSchema = pageOf(specSchema);
@@ -11,14 +10,5 @@ export function useSpecs(query: ListQuery) {
 
 /** After any change to a spec, the list, the revision pages and their comparisons are stale. */
 export function useRevalidateSpecs(): () => Promise<unknown> {
-  const { mutate } = useSWRConfig();
-  return () =>
-    mutate(
-      (key) =>
-        typeof key === 'object' &&
-        key !== null &&
-        'path' in key &&
-        typeof key.path === 'string' &&
-        key.path.startsWith(SPECS_PATH),
-    );
+  return useRevalidateUnder(SPECS_PATH);
 }

@@ -1,6 +1,5 @@
 import { pageOf, userSchema, type ListQuery, type Page, type User } from '@evenset/contracts';
-import { useSWRConfig } from 'swr';
-import { apiKey, isApiKeyFor, useApi } from '../../../lib/swr';
+import { apiKey, useApi, useRevalidateUnder } from '../../../lib/swr';
 
 const USERS_PATH = '/users';
 const usersPageSchema = pageOf(userSchema);
@@ -12,6 +11,5 @@ export function useUsers(query: ListQuery) {
 
 /** After any change to a person, every cached page of the list is stale. */
 export function useRevalidateUsers(): () => Promise<unknown> {
-  const { mutate } = useSWRConfig();
-  return () => mutate((key) => isApiKeyFor(USERS_PATH, key));
+  return useRevalidateUnder(USERS_PATH);
 }
