@@ -1,4 +1,5 @@
 import Paper from '@mui/material/Paper';
+import type { SWRResponse } from 'swr';
 import { DataGrid, type GridColDef, type GridLocaleText, type GridValidRowModel } from '@mui/x-data-grid';
 import type { ListQuery } from '@evenset/contracts';
 import { describeError } from '../lib/errors';
@@ -21,11 +22,11 @@ interface AppDataGridProps<R extends GridValidRowModel> {
   /** Accessible name of the grid, e.g. "People". */
   label: string;
   columns: readonly GridColDef<R>[];
-  /** The current page of rows and the total across all pages, as the API answered. */
-  page: { items: R[]; total: number } | undefined;
-  loading: boolean;
-  error: unknown;
-  onRetry: () => void;
+  /** The SWR request for the current page: its rows, total, loading state and error. */
+  request: Pick<
+    SWRResponse<{ items: R[]; total: number }, unknown>,
+    'data' | 'error' | 'isLoading' | 'isValidating' | 'mutate'
+  >;
   /** From useGridListQuery: the models the grid shows and the query they make. */
   list: { query: ListQuery; grid: GridListState };
   searchLabel: string;
@@ -40,10 +41,7 @@ interface AppDataGridProps<R extends GridValidRowModel> {
 export function AppDataGrid<R extends GridValidRowModel>({
   label,
   columns,
-  page,
-  loading,
-  error,
-  onRetry,
+  request,
   list,
   searchLabel,
   emptyState,
@@ -51,6 +49,9 @@ export function AppDataGrid<R extends GridValidRowModel>({
   onRowClick,
 }: AppDataGridProps<R>) {
   const [density, setDensity] = useStoredDensity();
+  const { data: page, error } = request;
+  const loading = request.isLoading || request.isValidating;
+  const onRetry = () => void request.mutate();
   const overlay = error
     ? { title: 'The list could not be loaded', hint: describeError(error), onRetry }
     : list.query.q

@@ -79,7 +79,7 @@ function instrumentColumns(
 /** Indicators, height gauges and probes with their resolution and calibration due date. */
 export function InstrumentsGrid({ unit, canEdit }: { unit: DisplayUnit; canEdit: boolean }) {
   const list = useGridListQuery([{ field: 'code', sort: 'asc' }]);
-  const { data, error, isLoading, isValidating, mutate } = useInstruments(list.query);
+  const request = useInstruments(list.query);
   const revalidate = useRevalidateInstruments();
   const [action, setAction] = useState<InstrumentAction | null>(null);
   const columns = useMemo(() => instrumentColumns(unit, canEdit ? setAction : null), [unit, canEdit]);
@@ -89,10 +89,7 @@ export function InstrumentsGrid({ unit, canEdit }: { unit: DisplayUnit; canEdit:
       <AppDataGrid
         label="Instruments"
         columns={columns}
-        page={data}
-        loading={isLoading || isValidating}
-        error={error}
-        onRetry={() => void mutate()}
+        request={request}
         list={list}
         searchLabel="Search instruments"
         emptyState={{

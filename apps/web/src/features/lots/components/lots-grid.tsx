@@ -35,15 +35,12 @@ const columns: GridColDef<Lot>[] = [
 export function LotsGrid({ canCreate }: { canCreate: boolean }) {
   const navigate = useNavigate();
   const list = useGridListQuery([{ field: 'grindDate', sort: 'desc' }]);
-  const { data, error, isLoading, isValidating, mutate } = useLots(list.query);
+  const request = useLots(list.query);
   return (
     <AppDataGrid
       label="Lots"
       columns={columns}
-      page={data}
-      loading={isLoading || isValidating}
-      error={error}
-      onRetry={() => void mutate()}
+      request={request}
       list={list}
       searchLabel="Search lots"
       emptyState={{

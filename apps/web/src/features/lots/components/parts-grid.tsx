@@ -69,16 +69,13 @@ function partColumns(unit: DisplayUnit): GridColDef<PartRow>[] {
 export function PartsGrid({ lotId, unit }: { lotId: string; unit: DisplayUnit }) {
   const navigate = useNavigate();
   const list = useGridListQuery([{ field: 'serial', sort: 'asc' }]);
-  const { data, error, isLoading, isValidating, mutate } = useLotParts(lotId, list.query);
+  const request = useLotParts(lotId, list.query);
   const columns = useMemo(() => partColumns(unit), [unit]);
   return (
     <AppDataGrid
       label="Parts"
       columns={columns}
-      page={data}
-      loading={isLoading || isValidating}
-      error={error}
-      onRetry={() => void mutate()}
+      request={request}
       list={list}
       searchLabel="Search serials"
       emptyState={{

@@ -53,16 +53,13 @@ function masterColumns(unit: DisplayUnit): GridColDef<Master>[] {
 export function MastersGrid({ unit, canEdit }: { unit: DisplayUnit; canEdit: boolean }) {
   const navigate = useNavigate();
   const list = useGridListQuery([{ field: 'code', sort: 'asc' }]);
-  const { data, error, isLoading, isValidating, mutate } = useMasters(list.query);
+  const request = useMasters(list.query);
   const columns = useMemo(() => masterColumns(unit), [unit]);
   return (
     <AppDataGrid
       label="Master gauges"
       columns={columns}
-      page={data}
-      loading={isLoading || isValidating}
-      error={error}
-      onRetry={() => void mutate()}
+      request={request}
       list={list}
       searchLabel="Search masters"
       emptyState={{

@@ -49,7 +49,7 @@ function materialColumns(onEdit: ((material: Material) => void) | null): GridCol
 /** The materials table; engineers may edit a row (`canEdit`), everyone else reads it. */
 export function MaterialsGrid({ canEdit }: { canEdit: boolean }) {
   const list = useGridListQuery([{ field: 'name', sort: 'asc' }]);
-  const { data, error, isLoading, isValidating, mutate } = useMaterials(list.query);
+  const request = useMaterials(list.query);
   const [editing, setEditing] = useState<Material | null>(null);
   const columns = useMemo(() => materialColumns(canEdit ? setEditing : null), [canEdit]);
   return (
@@ -57,10 +57,7 @@ export function MaterialsGrid({ canEdit }: { canEdit: boolean }) {
       <AppDataGrid
         label="Materials"
         columns={columns}
-        page={data}
-        loading={isLoading || isValidating}
-        error={error}
-        onRetry={() => void mutate()}
+        request={request}
         list={list}
         searchLabel="Search materials"
         emptyState={{ title: 'No materials yet', hint: 'Add the first material with “Add material” above.' }}

@@ -57,15 +57,12 @@ const columns: GridColDef<Spec>[] = [
 export function SpecsGrid({ canEdit }: { canEdit: boolean }) {
   const navigate = useNavigate();
   const list = useGridListQuery([{ field: 'partNumber', sort: 'asc' }]);
-  const { data, error, isLoading, isValidating, mutate } = useSpecs(list.query);
+  const request = useSpecs(list.query);
   return (
     <AppDataGrid
       label="Specs"
       columns={columns}
-      page={data}
-      loading={isLoading || isValidating}
-      error={error}
-      onRetry={() => void mutate()}
+      request={request}
       list={list}
       searchLabel="Search part number or title"
       emptyState={{

@@ -98,7 +98,7 @@ function peopleColumns(currentUserId: string, act: (action: PersonAction) => voi
 /** Everyone who can (or could) sign in, with what an admin can change about them. */
 export function PeopleGrid({ currentUserId }: { currentUserId: string }) {
   const list = useGridListQuery([{ field: 'displayName', sort: 'asc' }]);
-  const { data, error, isLoading, isValidating, mutate } = useUsers(list.query);
+  const request = useUsers(list.query);
   const [action, setAction] = useState<PersonAction | null>(null);
   const columns = useMemo(() => peopleColumns(currentUserId, setAction), [currentUserId]);
   const close = () => setAction(null);
@@ -108,10 +108,7 @@ export function PeopleGrid({ currentUserId }: { currentUserId: string }) {
       <AppDataGrid
         label="People"
         columns={columns}
-        page={data}
-        loading={isLoading || isValidating}
-        error={error}
-        onRetry={() => void mutate()}
+        request={request}
         list={list}
         searchLabel="Search people"
         emptyState={{ title: 'No people yet', hint: 'Add the first person with “Add person” above.' }}
