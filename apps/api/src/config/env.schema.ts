@@ -22,6 +22,16 @@ export const envSchema = z.object({
   LOGIN_THROTTLE_TTL_SECONDS: z.coerce.number().int().min(1).default(60),
   EVENSET_ADMIN_EMAIL: z.string().optional(),
   EVENSET_ADMIN_PASSWORD: z.string().optional(),
+  /** Address people reach the app at, for links in e-mails and the certificate's QR code. */
+  PUBLIC_URL: z.url({ error: 'Set PUBLIC_URL to the http(s) address of the app.' }).optional(),
+  /** The shop's name and postal address, printed on certificates. */
+  SHOP_NAME: z.string().min(1).default('Kestrel Workholding'),
+  SHOP_ADDRESS: z.string().min(1).default('14 Millrace Lane, Harwick Industrial Park'),
+  /** Ed25519 private key (PKCS#8 PEM) that signs certificates; required in production. */
+  CERTIFICATE_SIGNING_KEY: z.string().optional(),
+  /** Outgoing mail server, e.g. smtp://127.0.0.1:2525; unset, messages are recorded as not sent. */
+  SMTP_URL: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default('Evenset <evenset@kestrel.example>'),
 });
 export type Env = z.infer<typeof envSchema>;
 

@@ -1,3 +1,16 @@
+import { PasswordResetToken } from '../auth/password-reset-token.entity';
+import { CertificateRevocation } from '../certificates/certificate-revocation.entity';
+import { Certificate } from '../certificates/certificate.entity';
+import { CustomerOrder } from '../customers/customer-order.entity';
+import { Customer } from '../customers/customer.entity';
+import { CapturedMail } from '../mail/captured-mail.entity';
+import { MailAttachment } from '../mail/mail-attachment.entity';
+import { MailAttempt } from '../mail/mail-attempt.entity';
+import { MailMessage } from '../mail/mail-message.entity';
+import { GrindRequestStep } from '../replacements/grind-request-step.entity';
+import { GrindRequest } from '../replacements/grind-request.entity';
+import { MatchedSet } from '../sets/matched-set.entity';
+import { SetMember } from '../sets/set-member.entity';
 import { AuditEntry } from '../audit/audit-entry.entity';
 import { BenchRun } from '../inspections/bench-run.entity';
 import { InspectionReading } from '../inspections/inspection-reading.entity';
@@ -31,4 +44,17 @@ export const ENTITIES = [
   Inspection,
   InspectionReading,
   InspectionResult,
+  PasswordResetToken,
+  Customer,
+  CustomerOrder,
+  MatchedSet,
+  SetMember,
+  Certificate,
+  CertificateRevocation,
+  MailMessage,
+  MailAttachment,
+  MailAttempt,
+  CapturedMail,
+  GrindRequest,
+  GrindRequestStep,
 ];

@@ -8,6 +8,15 @@ export const DEMO_PASSWORD = 'evenset-demo-1';
 export async function choose(page: Page, label: string, option: RegExp): Promise<void> {
   await page.getByLabel(label, { exact: true }).click();
   await page.getByRole('option', { name: option }).click();
+  await menuClosed(page);
+}
+
+/**
+ * Waits until an open select menu has gone: while it closes, MUI hides the rest of the page from
+ * the accessibility tree, so a role query made meanwhile finds nothing.
+ */
+export async function menuClosed(page: Page): Promise<void> {
+  await page.getByRole('listbox').waitFor({ state: 'detached' });
 }
 
 /** The serials a lot created with `prefix` and `quantity` gets: E2E-001, E2E-002, … */
@@ -50,6 +59,7 @@ export async function startBenchRun(
   await choose(page, 'Master gauge', run.master);
   await page.getByLabel('Instrument', { exact: true }).click();
   await page.getByRole('option').first().click();
+  await menuClosed(page);
   await page.getByRole('button', { name: /Next: zero on the master/ }).click();
   await page.getByRole('textbox', { name: /Reading (at|on)/ }).waitFor();
   await page.keyboard.type(run.zero);
