@@ -2,6 +2,7 @@ import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { PostgreSqlDriver } from '@mikro-orm/postgresql';
 import { DynamicModule, Module, RequestMethod } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD, APP_PIPE } from '@nestjs/core';
+import { ScheduleModule } from '@nestjs/schedule';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { LoggerModule } from 'nestjs-pino';
 import { randomUUID } from 'node:crypto';
@@ -9,6 +10,7 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
+import { CertificatesModule } from './certificates/certificates.module';
 import { AccessGuard } from './common/auth/access.guard';
 import { CsrfGuard } from './common/auth/csrf.guard';
 import { AllExceptionsFilter } from './common/errors/all-exceptions.filter';
@@ -19,7 +21,11 @@ import { ormConfig } from './database/mikro-orm.config';
 import { HealthModule } from './health/health.module';
 import { InspectionsModule } from './inspections/inspections.module';
 import { InstrumentsModule } from './instruments/instruments.module';
+import { CustomersModule } from './customers/customers.module';
 import { LotsModule } from './lots/lots.module';
+import { SetsModule } from './sets/sets.module';
+import { ReplacementsModule } from './replacements/replacements.module';
+import { MailModule } from './mail/mail.module';
 import { MastersModule } from './masters/masters.module';
 import { MaterialsModule } from './materials/materials.module';
 import { SessionModule } from './session/session.module';
@@ -71,8 +77,10 @@ export class AppModule {
               }),
             ]
           : []),
+        ScheduleModule.forRoot(),
         SessionModule,
         AuditModule,
+        MailModule,
         AuthModule,
         UsersModule,
         MaterialsModule,
@@ -81,6 +89,10 @@ export class AppModule {
         InstrumentsModule,
         LotsModule,
         InspectionsModule,
+        CustomersModule,
+        SetsModule,
+        CertificatesModule,
+        ReplacementsModule,
         HealthModule,
       ],
       providers: [

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { displayUnitSchema } from './users.schema';
+import { displayUnitSchema, emailSchema, newPasswordSchema } from './users.schema';
 import { roleSchema } from './roles.schema';
 
 export const loginSchema = z.object({
@@ -28,3 +28,15 @@ export const csrfTokenSchema = z.object({ csrfToken: z.string() });
 
 /** The header that carries the CSRF token on every state-changing request. */
 export const CSRF_HEADER = 'x-csrf-token';
+
+/** Asking for a reset link by e-mail; the answer never tells whether the address has an account. */
+export const passwordResetRequestSchema = z.object({ email: emailSchema });
+export type PasswordResetRequestInput = z.infer<typeof passwordResetRequestSchema>;
+
+export const PASSWORD_RESET_REQUESTED_MESSAGE = 'If that address belongs to an active account, a link is on its way.';
+
+export const passwordResetConfirmSchema = z.object({
+  token: z.string({ error: 'The reset link is incomplete.' }).trim().min(1, 'The reset link is incomplete.').max(200),
+  password: newPasswordSchema,
+});
+export type PasswordResetConfirmInput = z.infer<typeof passwordResetConfirmSchema>;

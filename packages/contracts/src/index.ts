@@ -10,3 +10,8 @@ export * from './masters.schema';
 export * from './instruments.schema';
 export * from './lots.schema';
 export * from './inspections.schema';
+export * from './customers.schema';
+export * from './sets.schema';
+export * from './mail.schema';
+export * from './certificates.schema';
+export * from './replacements.schema';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { windowSummarySchema } from './sets.schema';
 import { dispositionSchema, lotSchema, partStatusSchema, verdictSchema } from './lots.schema';
 import { masterDetailSchema, reasonSchema } from './masters.schema';
 import { displayUnitSchema } from './users.schema';
@@ -207,6 +208,10 @@ export const partDetailSchema = z.object({
   inspections: z.array(inspectionSchema),
   /** Newest first. */
   dispositions: z.array(dispositionSchema),
+  /** The part number's interchange window, and whether this part's height lies outside it (null: not measured). */
+  interchange: windowSummarySchema.extend({ outside: z.boolean().nullable() }),
+  /** The set the part was allocated to, if any. */
+  set: z.object({ id: z.string(), setNumber: z.string(), kind: z.enum(['set', 'replacement']) }).nullable(),
   createdAt: z.string(),
 });
 export type PartDetail = z.infer<typeof partDetailSchema>;
@@ -249,7 +254,10 @@ export const readingsImportSchema = z.object({
 });
 export type ReadingsImport = z.infer<typeof readingsImportSchema>;
 
-/** Parts whose verdict changed when a master calibration was corrected and their heights recomputed. */
+/**
+ * Parts whose verdict changed when a master calibration was corrected and their heights recomputed,
+ * and the certificates whose facts that changes.
+ */
 export const correctionImpactSchema = z.object({
   recomputed: z.number(),
   changed: z.array(
@@ -262,6 +270,17 @@ export const correctionImpactSchema = z.object({
       heightAfter: z.number(),
       before: verdictSchema,
       after: verdictSchema,
+    }),
+  ),
+  /** Certificates of sets holding a recomputed part: their facts would no longer read the same. */
+  certificates: z.array(
+    z.object({
+      id: z.string(),
+      certificateNumber: z.string(),
+      setId: z.string(),
+      setNumber: z.string(),
+      customerName: z.string(),
+      revoked: z.boolean(),
     }),
   ),
 });

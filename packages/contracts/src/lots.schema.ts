@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { listQuerySchema } from './list.schema';
 import { isoDateSchema, reasonSchema } from './masters.schema';
+import { windowSummarySchema } from './sets.schema';
 import { decisionRuleSchema } from './specs.schema';
 import { displayUnitSchema } from './users.schema';
 
@@ -113,6 +114,8 @@ export const lotDetailSchema = lotSchema.extend({
   counts: z.record(partStatusSchema, z.number()),
   /** Spread of the current heights of the inspected parts, mm; null before any inspection. */
   heightSpread: z.object({ lowest: z.number(), highest: z.number(), spread: z.number(), parts: z.number() }).nullable(),
+  /** The part number's interchange window (sets sold before), and this lot's parts outside it. */
+  interchange: windowSummarySchema.extend({ outsideSerials: z.array(z.string()) }),
 });
 export type LotDetail = z.infer<typeof lotDetailSchema>;
 
@@ -265,5 +268,7 @@ export const partRowSchema = z.object({
   inspectedAt: z.string().nullable(),
   /** The newest disposition or release, whatever came after it. */
   disposition: dispositionKindSchema.nullable(),
+  /** The height would not match sets sold before; null when not measured. */
+  outsideWindow: z.boolean().nullable(),
 });
 export type PartRow = z.infer<typeof partRowSchema>;

@@ -2,15 +2,19 @@ import { Module } from '@nestjs/common';
 import { PassportModule } from '@nestjs/passport';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { AppConfig } from '../config/app-config.service';
+import { MailModule } from '../mail/mail.module';
 import { UsersModule } from '../users/users.module';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
 import { LocalStrategy } from './local.strategy';
+import { PasswordResetController } from './password-reset.controller';
+import { PasswordResetService } from './password-reset.service';
 import { SessionSerializer } from './session.serializer';
 
 @Module({
   imports: [
     UsersModule,
+    MailModule,
     PassportModule.register({ session: true }),
     ThrottlerModule.forRootAsync({
       inject: [AppConfig],
@@ -23,7 +27,7 @@ import { SessionSerializer } from './session.serializer';
       ],
     }),
   ],
-  controllers: [AuthController],
-  providers: [AuthService, LocalStrategy, SessionSerializer],
+  controllers: [AuthController, PasswordResetController],
+  providers: [AuthService, LocalStrategy, SessionSerializer, PasswordResetService],
 })
 export class AuthModule {}

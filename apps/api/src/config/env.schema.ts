@@ -1,3 +1,4 @@
+import { validateCronExpression } from 'cron';
 import { z } from 'zod';
 
 const flag = z
@@ -32,6 +33,11 @@ export const envSchema = z.object({
   /** Outgoing mail server, e.g. smtp://127.0.0.1:2525; unset, messages are recorded as not sent. */
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().min(3).default('Evenset <evenset@kestrel.example>'),
+  /** When the calibration-due digest goes to engineers (cron, server time): 06:00 every day. */
+  MAIL_DIGEST_CRON: z
+    .string()
+    .refine((value) => validateCronExpression(value).valid, 'Use a cron expression, like "0 6 * * *".')
+    .default('0 6 * * *'),
 });
 export type Env = z.infer<typeof envSchema>;
 

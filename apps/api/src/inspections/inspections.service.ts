@@ -352,7 +352,7 @@ export class InspectionsService {
     superseded: MasterCalibration,
     correcting: MasterCalibration,
     reason: string,
-  ): Promise<CorrectionImpact> {
+  ): Promise<Omit<CorrectionImpact, 'certificates'>> {
     const candidates = await this.em.find(
       InspectionResult,
       { masterCalibration: superseded },
@@ -361,7 +361,7 @@ export class InspectionsService {
     const inspections = [...new Map(candidates.map((r) => [r.inspection.id, r.inspection])).values()];
     const latest = await this.latestResults(inspections.map((i) => i.id));
     const readings = await this.readingsOf(inspections.map((i) => i.id));
-    const impact: CorrectionImpact = { recomputed: 0, changed: [] };
+    const impact: Omit<CorrectionImpact, 'certificates'> = { recomputed: 0, changed: [] };
     for (const inspection of inspections) {
       const before = latest.get(inspection.id);
       if (!before || before.masterCalibration.id !== superseded.id) continue;

@@ -24,6 +24,7 @@ import { Lot } from './lot.entity';
 import { LotFullException, LotNumberTakenException, SerialsTakenException } from './lots.exception';
 import { Part } from './part.entity';
 import { partRow, PartStatusService } from './part-status';
+import { InterchangeService } from '../sets/interchange.service';
 
 /** Columns a lot's part list sorts on; nulls (not inspected) go last either way. */
 const PART_SORTS = ['serial', 'status', 'height', 'flatness', 'parallelism', 'runout', 'expandedUncertainty'] as const;
@@ -34,6 +35,7 @@ export class LotsService {
     private readonly em: EntityManager,
     private readonly audit: AuditService,
     private readonly states: PartStatusService,
+    private readonly interchange: InterchangeService,
   ) {}
 
   async list(query: LotListQuery): Promise<Page<LotView>> {
@@ -88,6 +90,7 @@ export class LotsService {
     const counts = Object.fromEntries(PART_STATUSES.map((s) => [s, 0])) as Record<PartStatus, number>;
     for (const s of states) counts[s.status] += 1;
     const heights = states.flatMap((s) => (s.result ? [s.result.computed.height] : []));
+    const window = await this.interchange.summary(lot.spec.partNumber);
     const spec = lot.spec;
     return {
       ...(await this.view(lot)),
@@ -102,6 +105,13 @@ export class LotsService {
         decisionRule: spec.decisionRule,
       },
       counts,
+      interchange: {
+        ...window.summary,
+        outsideSerials: states
+          .filter((s) => window.outside(s.result?.computed.height ?? null))
+          .map((s) => s.part.serial)
+          .sort(),
+      },
       heightSpread: heights.length
         ? {
             lowest: Math.min(...heights),
@@ -120,8 +130,9 @@ export class LotsService {
   async parts(id: string, query: PartListQuery): Promise<Page<PartRow>> {
     const lot = await this.get(id);
     const q = query.q?.trim().toUpperCase();
+    const { outside } = await this.interchange.summary(lot.spec.partNumber);
     const rows = (await this.states.states(await this.em.find(Part, { lot })))
-      .map(partRow)
+      .map((state) => partRow(state, outside))
       .filter((r) => (!q || r.serial.includes(q)) && (!query.status || r.status === query.status));
     const [field, direction] = (query.sort ?? 'serial:asc').split(':') as [string, string];
     const key = (PART_SORTS as readonly string[]).includes(field) ? (field as (typeof PART_SORTS)[number]) : 'serial';
@@ -168,7 +179,8 @@ export class LotsService {
         throw new SerialsTakenException(lot.spec.partNumber, serials);
       throw error;
     }
-    return { items: (await this.states.states(parts)).map(partRow) };
+    // New parts have no results yet, so none can be outside the window.
+    return { items: (await this.states.states(parts)).map((state) => partRow(state, () => null)) };
   }
 
   private async taken(lot: Lot, serials: string[]): Promise<string[]> {

@@ -69,8 +69,8 @@ function statusOf(
   return result.verdict;
 }
 
-/** A row of a lot's part list. */
-export function partRow(state: PartState): PartRow {
+/** A row of a lot's part list; `outsideWindow` tells whether a height would not match sets sold before. */
+export function partRow(state: PartState, outsideWindow: (height: number | null) => boolean | null): PartRow {
   const { part, inspection, result, disposition } = state;
   const computed = result?.computed;
   return {
@@ -93,5 +93,6 @@ export function partRow(state: PartState): PartRow {
     runFlagged: inspection?.run.flagged() ?? false,
     inspectedAt: inspection?.createdAt.toISOString() ?? null,
     disposition: disposition?.kind ?? null,
+    outsideWindow: outsideWindow(computed?.height ?? null),
   };
 }

@@ -1,13 +1,13 @@
 import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable } from '@nestjs/common';
-import { grindPlan, stockToRemove } from '@evenset/metrology';
-import type {
-  Disposition as DispositionView,
-  DispositionInput,
-  PartDetail,
-  PartStatus,
-  ReleaseInput,
-  SessionUser,
+import {
+  GRINDING_CAUTION_ITEMS,
+  type Disposition as DispositionView,
+  type DispositionInput,
+  type PartDetail,
+  type PartStatus,
+  type ReleaseInput,
+  type SessionUser,
 } from '@evenset/contracts';
 import { AuditService } from '../audit/audit.service';
 import { NotFoundException } from '../common/errors/domain.exception';
@@ -17,13 +17,13 @@ import { InspectionsService } from '../inspections/inspections.service';
 import { DispositionRefusedException } from './lots.exception';
 import { PartDisposition } from './part-disposition.entity';
 import { PartStatusService, type PartState } from './part-status';
+import { reworkPlan } from './rework-plan';
 import { Part } from './part.entity';
+import { InterchangeService } from '../sets/interchange.service';
+import { SetMember } from '../sets/set-member.entity';
 
-/** Shown beside every rework plan: grinding can hurt people. */
-export const GRINDING_CAUTIONS =
-  'Before grinding: use a wheel rated for the spindle speed, ring-tested and guarded; wear eye and face ' +
-  'protection; make sure the part is held on the chuck before starting; handle coolant as its data sheet ' +
-  'says. Follow local codes, the machine maker’s instructions and licensed practice.';
+/** Shown beside every rework plan: grinding can hurt people (the one list grind requests carry too). */
+export const GRINDING_CAUTIONS = `Before grinding: ${GRINDING_CAUTION_ITEMS.join(' ')}`;
 
 /** States a disposition may be made from: the part failed, sits in a guard band, is held, or is already in rework. */
 const DISPOSABLE: PartStatus[] = ['does-not-conform', 'guard-band', 'held', 'rework'];
@@ -37,6 +37,7 @@ export class PartsService {
     private readonly audit: AuditService,
     private readonly states: PartStatusService,
     private readonly inspections: InspectionsService,
+    private readonly interchange: InterchangeService,
   ) {}
 
   async detail(id: string): Promise<PartDetail> {
@@ -44,6 +45,8 @@ export class PartsService {
     const { part, status } = state!;
     const inspections = await this.em.find(Inspection, { part }, { orderBy: { createdAt: 'desc', id: 'asc' } });
     const dispositions = await this.em.find(PartDisposition, { part }, { orderBy: { createdAt: 'desc', id: 'asc' } });
+    const window = await this.interchange.summary(part.partNumber);
+    const member = await this.em.findOne(SetMember, { part }, { populate: ['set'] });
     return {
       id: part.id,
       serial: part.serial,
@@ -52,6 +55,8 @@ export class PartsService {
       status,
       inspections: await this.inspections.views(inspections),
       dispositions: dispositions.map(view),
+      interchange: { ...window.summary, outside: window.outside(state!.result?.computed.height ?? null) },
+      set: member ? { id: member.set.id, setNumber: member.set.setNumber, kind: member.set.kind } : null,
       createdAt: part.createdAt.toISOString(),
     };
   }
@@ -103,27 +108,15 @@ export class PartsService {
       target !== undefined
         ? toMm(target, unit)
         : toMm(spec.nominalMm + (spec.bandLowerMm + spec.bandUpperMm) / 2, 'mm');
-    const stock = stockToRemove(current, targetMm);
-    if (!(stock > 0))
+    if (!(targetMm < current))
       throw new DispositionRefusedException(
         `Part ${state.part.serial} is already at or below the target height; grinding can only remove stock.`,
       );
-    record.currentHeightMm = current;
-    record.targetHeightMm = targetMm;
-    record.stockMm = stock;
-    record.passes =
-      spec.roughDepthMm != null &&
-      spec.finishAllowanceMm != null &&
-      spec.finishDepthMm != null &&
-      spec.sparkOutPasses != null
-        ? grindPlan({
-            stock,
-            roughDepth: spec.roughDepthMm,
-            finishAllowance: spec.finishAllowanceMm,
-            finishDepth: spec.finishDepthMm,
-            sparkOutPasses: spec.sparkOutPasses,
-          }).passes
-        : null;
+    const plan = reworkPlan(spec, current, targetMm);
+    record.currentHeightMm = plan.currentHeightMm;
+    record.targetHeightMm = plan.targetHeightMm;
+    record.stockMm = plan.stockMm;
+    record.passes = plan.passes;
   }
 
   private async save(actor: SessionUser, record: PartDisposition): Promise<DispositionView> {

@@ -15,6 +15,7 @@ import type {
 } from '@evenset/contracts';
 import { createHash } from 'node:crypto';
 import { AuditService } from '../audit/audit.service';
+import { certificatesOfParts } from '../certificates/certificate-impact';
 import { NotFoundException, ValidationFailedException } from '../common/errors/domain.exception';
 import { gaugeStatus, todayIso } from '../common/gauges/gauge-status';
 import { listOptions, searchAny } from '../common/list-query';
@@ -22,6 +23,7 @@ import { toMm } from '../common/units/lengths';
 import { CERTIFICATE_FIELD, type UploadedCertificate } from '../files/certificate-upload.interceptor';
 import { detectCertificateType, safeFilename } from '../files/file-type';
 import { FileMissingException, FileTypeRefusedException } from '../files/files.exception';
+import { InspectionResult } from '../inspections/inspection-result.entity';
 import { InspectionsService } from '../inspections/inspections.service';
 import { Material } from '../materials/material.entity';
 import { CalibrationCertificate } from './calibration-certificate.entity';
@@ -174,8 +176,12 @@ export class MastersService {
       after: { ...calibrationSummary(calibration), sha256: certificate.sha256 },
       reason: form.reason,
     });
+    const certificates = supersedes ? await certificatesOfParts(this.em, await this.partsMeasuredWith(supersedes)) : [];
     const impact: CorrectionImpact | null = supersedes
-      ? await this.inspections.recomputeForCorrection(actor, supersedes, calibration, form.reason ?? '')
+      ? {
+          ...(await this.inspections.recomputeForCorrection(actor, supersedes, calibration, form.reason ?? '')),
+          certificates,
+        }
       : null;
     try {
       await this.em.flush();
@@ -195,6 +201,18 @@ export class MastersService {
     if (!calibration) throw new NotFoundException('This calibration certificate');
     const { filename, contentType, content } = calibration.certificate;
     return { filename, contentType, content };
+  }
+
+  /** Parts whose height in force was measured against `calibration` (those a correction recomputes). */
+  private async partsMeasuredWith(calibration: MasterCalibration): Promise<string[]> {
+    const results = await this.em.find(
+      InspectionResult,
+      { masterCalibration: calibration },
+      { populate: ['inspection'] },
+    );
+    const inspections = [...new Map(results.map((r) => [r.inspection.id, r.inspection])).values()];
+    const latest = await this.inspections.latestResults(inspections.map((i) => i.id));
+    return inspections.filter((i) => latest.get(i.id)?.masterCalibration.id === calibration.id).map((i) => i.part.id);
   }
 
   private checkPlausible(master: MasterGauge, form: CalibrationForm, calibratedSizeMm: number): void {

@@ -9,6 +9,7 @@ import { Instrument } from '../../instruments/instrument.entity';
 import { PartStatusService } from '../../lots/part-status';
 import { Part } from '../../lots/part.entity';
 import { PartsService } from '../../lots/parts.service';
+import { InterchangeService } from '../../sets/interchange.service';
 import { MasterGauge } from '../../masters/master-gauge.entity';
 import { Spec } from '../../specs/spec.entity';
 import { User } from '../../users/user.entity';
@@ -87,6 +88,50 @@ const DEMO_LOTS: DemoLot[] = [
       { serial: 'PP6-0444', mean: -0.00002 },
     ],
   },
+  {
+    // Sold last year: a set of four to Marrow Creek Tooling (see demo-sales.ts).
+    lotNumber: 'L-2025-118',
+    partNumber: 'RB-40',
+    revision: 'B',
+    grindDaysAgo: 310,
+    inspector: 'inspector@kestrel.example',
+    master: 'MG-1.500-A',
+    masterEnd: 0.00001,
+    parts: [
+      { serial: 'RB40-1181', mean: -0.00019 },
+      { serial: 'RB40-1182', mean: -0.0002 },
+      { serial: 'RB40-1183', mean: -0.00021 },
+      { serial: 'RB40-1184', mean: -0.0002 },
+    ],
+  },
+  {
+    // Sold last year: a pair to Fenbridge Fixture Works, ground low in the band. This year's
+    // PP-6 lot (L-2026-044) came out higher and no longer matches it.
+    lotNumber: 'L-2025-131',
+    partNumber: 'PP-6',
+    revision: 'A',
+    grindDaysAgo: 240,
+    inspector: 'inspector2@kestrel.example',
+    master: 'MG-1.000-A',
+    masterEnd: 0,
+    parts: [
+      { serial: 'PP6-1311', mean: -0.00015 },
+      { serial: 'PP6-1312', mean: -0.00016 },
+    ],
+  },
+  {
+    lotNumber: 'L-2026-052',
+    partNumber: 'RB-40',
+    revision: 'B',
+    grindDaysAgo: 2,
+    inspector: 'inspector@kestrel.example',
+    master: 'MG-1.500-A',
+    masterEnd: 0.00001,
+    parts: [-0.00018, -0.00019, -0.0002, -0.0002, -0.00021, -0.00021, -0.00022, -0.00023].map((mean, i) => ({
+      serial: `RB40-052${i + 1}`,
+      mean,
+    })),
+  },
 ];
 
 /** Dispositions and releases an engineer made after reviewing the lots. */
@@ -104,13 +149,23 @@ const DECISIONS: [string, 'rework' | 'scrap' | 'use-as-is' | 'release', string?]
   ['RB40-0474', 'release'],
   ['PP6-0441', 'release'],
   ['PP6-0442', 'release'],
+  ...['RB40-1181', 'RB40-1182', 'RB40-1183', 'RB40-1184', 'PP6-1311', 'PP6-1312'].map(
+    (serial) => [serial, 'release'] as [string, 'release'],
+  ),
+  ...Array.from({ length: 8 }, (_, i) => [`RB40-052${i + 1}`, 'release'] as [string, 'release']),
 ];
 
 /** Lots, runs, inspections and dispositions of the demo, through the API's own services. Idempotent. */
 export async function seedDemoLots(em: EntityManager, today = todayIso()): Promise<void> {
   const audit = new AuditService(em);
   const inspections = new InspectionsService(em, audit);
-  const parts = new PartsService(em, audit, new PartStatusService(em, inspections), inspections);
+  const parts = new PartsService(
+    em,
+    audit,
+    new PartStatusService(em, inspections),
+    inspections,
+    new InterchangeService(em),
+  );
   const engineer = asActor(await em.findOneOrFail(User, { email: 'engineer@kestrel.example' }));
   const indicator = await em.findOneOrFail(Instrument, { code: 'IND-01' });
 
@@ -153,7 +208,7 @@ export async function seedDemoLots(em: EntityManager, today = todayIso()): Promi
   }
 }
 
-function asActor(user: User): SessionUser {
+export function asActor(user: User): SessionUser {
   return {
     id: user.id,
     email: user.email,

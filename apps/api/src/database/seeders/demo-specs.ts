@@ -63,7 +63,8 @@ export const PP6_REV_A: DemoDefinition = {
   heightStatistic: 'highest',
   heightStation: null,
   decisionRule: 'simple',
-  grinding: null,
+  // Parallels are finished in light passes (from memory: shop habit, not a handbook figure).
+  grinding: { roughDepth: 0.0005, finishAllowance: 0.0002, finishDepth: 0.00005, sparkOutPasses: 2 },
   masterDriftLimit: 0.00005,
   plan: {
     stations: [0.5, 1.75, 3, 4.25, 5.5].map((x, i) => ({ name: `L${i + 1}`, x, y: 0.25 })),

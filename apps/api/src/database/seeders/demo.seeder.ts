@@ -7,6 +7,7 @@ import { ensureSpec } from '../factories/spec.factory';
 import { ensureUser } from '../factories/user.factory';
 import { demoInstruments, demoMasters } from './demo-gauges';
 import { seedDemoLots } from './demo-lots';
+import { seedDemoSales } from './demo-sales';
 import { DEMO_PEOPLE } from './demo-people';
 import { LR90_REV_A, PP6_REV_A, RB40_REV_A, RB40_REV_B } from './demo-specs';
 import { SHOP_MATERIALS, STEEL } from './shop-materials';
@@ -41,5 +42,6 @@ export class DemoSeeder extends Seeder {
     for (const instrument of demoInstruments()) await ensureInstrument(em, instrument);
     await em.flush();
     await seedDemoLots(em);
+    await seedDemoSales(em);
   }
 }
