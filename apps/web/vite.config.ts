@@ -50,7 +50,6 @@ export default defineConfig({
     strictPort: true,
     proxy: {
       '/api': { target: api, changeOrigin: false },
-      '/verify': { target: api, changeOrigin: false },
     },
   },
   preview: { host: '127.0.0.1', port: 4173 },

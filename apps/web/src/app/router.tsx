@@ -12,6 +12,15 @@ const SignInRoute = lazy(() => import('./routes/sign-in').then((m) => ({ default
 const AppLayoutRoute = lazy(() => import('./routes/app-layout').then((m) => ({ default: m.AppLayoutRoute })));
 const HomeRoute = lazy(() => import('./routes/home').then((m) => ({ default: m.HomeRoute })));
 const PeopleRoute = lazy(() => import('./routes/people').then((m) => ({ default: m.PeopleRoute })));
+const CertificatesRoute = lazy(() => import('./routes/certificates').then((m) => ({ default: m.CertificatesRoute })));
+const VerifyRoute = lazy(() => import('./routes/verify').then((m) => ({ default: m.VerifyRoute })));
+const OutboxRoute = lazy(() => import('./routes/outbox').then((m) => ({ default: m.OutboxRoute })));
+const ForgotPasswordRoute = lazy(() =>
+  import('./routes/forgot-password').then((m) => ({ default: m.ForgotPasswordRoute })),
+);
+const ResetPasswordRoute = lazy(() =>
+  import('./routes/reset-password').then((m) => ({ default: m.ResetPasswordRoute })),
+);
 const SpecsRoute = lazy(() => import('./routes/specs').then((m) => ({ default: m.SpecsRoute })));
 const SpecNewRoute = lazy(() => import('./routes/spec-new').then((m) => ({ default: m.SpecNewRoute })));
 const SpecDetailRoute = lazy(() => import('./routes/spec-detail').then((m) => ({ default: m.SpecDetailRoute })));
@@ -24,6 +33,20 @@ const BenchRoute = lazy(() => import('./routes/bench').then((m) => ({ default: m
 const LotsRoute = lazy(() => import('./routes/lots').then((m) => ({ default: m.LotsRoute })));
 const LotReviewRoute = lazy(() => import('./routes/lot-review').then((m) => ({ default: m.LotReviewRoute })));
 const PartDetailRoute = lazy(() => import('./routes/part-detail').then((m) => ({ default: m.PartDetailRoute })));
+const CustomersRoute = lazy(() => import('./routes/customers').then((m) => ({ default: m.CustomersRoute })));
+const CustomerDetailRoute = lazy(() =>
+  import('./routes/customer-detail').then((m) => ({ default: m.CustomerDetailRoute })),
+);
+const SetsRoute = lazy(() => import('./routes/sets').then((m) => ({ default: m.SetsRoute })));
+const SetBuilderRoute = lazy(() => import('./routes/set-builder').then((m) => ({ default: m.SetBuilderRoute })));
+const SetDetailRoute = lazy(() => import('./routes/set-detail').then((m) => ({ default: m.SetDetailRoute })));
+const ReplacementCheckRoute = lazy(() =>
+  import('./routes/replacement-check').then((m) => ({ default: m.ReplacementCheckRoute })),
+);
+const GrindRequestsRoute = lazy(() =>
+  import('./routes/grind-requests').then((m) => ({ default: m.GrindRequestsRoute })),
+);
+const GrindRequestRoute = lazy(() => import('./routes/grind-request').then((m) => ({ default: m.GrindRequestRoute })));
 const NotFoundRoute = lazy(() => import('./routes/not-found').then((m) => ({ default: m.NotFoundRoute })));
 
 /** A page open only to the roles its path names. */
@@ -41,6 +64,10 @@ const router = createBrowserRouter([
     errorElement: <RouteError />,
     children: [
       { path: paths.signIn.path, element: <SignInRoute /> },
+      // Public, outside the signed-in frame: anyone holding a certificate may check it.
+      { path: paths.verify.path, element: <VerifyRoute /> },
+      { path: paths.forgotPassword.path, element: <ForgotPasswordRoute /> },
+      { path: paths.resetPassword.path, element: <ResetPasswordRoute /> },
       {
         element: (
           <RequireAuth>
@@ -54,6 +81,8 @@ const router = createBrowserRouter([
             children: [
               guarded(paths.home, <HomeRoute />),
               guarded(paths.people, <PeopleRoute />),
+              guarded(paths.certificates, <CertificatesRoute />),
+              guarded(paths.outbox, <OutboxRoute />),
               guarded(paths.specs, <SpecsRoute />),
               guarded(paths.specNew, <SpecNewRoute />),
               guarded(paths.spec, <SpecDetailRoute />),
@@ -66,6 +95,14 @@ const router = createBrowserRouter([
               guarded(paths.lots, <LotsRoute />),
               guarded(paths.lot, <LotReviewRoute />),
               guarded(paths.part, <PartDetailRoute />),
+              guarded(paths.customers, <CustomersRoute />),
+              guarded(paths.customer, <CustomerDetailRoute />),
+              guarded(paths.sets, <SetsRoute />),
+              guarded(paths.setNew, <SetBuilderRoute />),
+              guarded(paths.set, <SetDetailRoute />),
+              guarded(paths.replacements, <ReplacementCheckRoute />),
+              guarded(paths.grindRequests, <GrindRequestsRoute />),
+              guarded(paths.grindRequest, <GrindRequestRoute />),
               { path: '*', element: <NotFoundRoute /> },
             ],
           },

@@ -4,8 +4,17 @@ import { navigationFor, type NavItem } from './navigation';
 const labels = (items: readonly NavItem[]): string[] => items.map((item) => item.label);
 
 describe('navigationFor', () => {
-  it('shows an admin Home and People', () => {
-    expect(labels(navigationFor(['admin']))).toEqual(['Home', 'People']);
+  it('shows an admin Home, the customer pages, People and the Outbox', () => {
+    expect(labels(navigationFor(['admin']))).toEqual([
+      'Home',
+      'Customers',
+      'Sets',
+      'Certificates',
+      'Replacements',
+      'Grind requests',
+      'People',
+      'Outbox',
+    ]);
   });
 
   it('hides People from everyone who is not an admin', () => {
@@ -23,6 +32,7 @@ describe('navigationFor', () => {
       'Masters',
       'Instruments',
       'Materials',
+      'Grind requests',
     ]);
     expect(labels(navigationFor(['engineer']))).toEqual([
       'Home',
@@ -31,8 +41,15 @@ describe('navigationFor', () => {
       'Masters',
       'Instruments',
       'Materials',
+      'Customers',
+      'Sets',
+      'Certificates',
+      'Replacements',
+      'Grind requests',
     ]);
-    expect(labels(navigationFor(['sales']))).toEqual(['Home']);
+    const customerPages = ['Home', 'Customers', 'Sets', 'Certificates', 'Replacements', 'Grind requests'];
+    expect(labels(navigationFor(['sales']))).toEqual(customerPages);
+    expect(labels(navigationFor(['service']))).toEqual(customerPages);
   });
 
   it('joins the pages of every role a person holds, each once and in menu order', () => {
@@ -44,7 +61,13 @@ describe('navigationFor', () => {
       'Masters',
       'Instruments',
       'Materials',
+      'Customers',
+      'Sets',
+      'Certificates',
+      'Replacements',
+      'Grind requests',
       'People',
+      'Outbox',
     ]);
   });
 

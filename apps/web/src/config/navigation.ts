@@ -3,6 +3,12 @@ import HomeOutlined from '@mui/icons-material/HomeOutlined';
 import Inventory2Outlined from '@mui/icons-material/Inventory2Outlined';
 import TableRestaurantOutlined from '@mui/icons-material/TableRestaurantOutlined';
 import PeopleAltOutlined from '@mui/icons-material/PeopleAltOutlined';
+import HandshakeOutlined from '@mui/icons-material/HandshakeOutlined';
+import ViewModuleOutlined from '@mui/icons-material/ViewModuleOutlined';
+import WorkspacePremiumOutlined from '@mui/icons-material/WorkspacePremiumOutlined';
+import OutboxOutlined from '@mui/icons-material/OutboxOutlined';
+import ChangeCircleOutlined from '@mui/icons-material/ChangeCircleOutlined';
+import PrecisionManufacturingOutlined from '@mui/icons-material/PrecisionManufacturingOutlined';
 import ArchitectureOutlined from '@mui/icons-material/ArchitectureOutlined';
 import ScienceOutlined from '@mui/icons-material/ScienceOutlined';
 import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
@@ -26,7 +32,23 @@ export const navigation: readonly NavItem[] = [
   { label: 'Masters', path: paths.masters.path, icon: StraightenOutlined, roles: paths.masters.roles },
   { label: 'Instruments', path: paths.instruments.path, icon: SpeedOutlined, roles: paths.instruments.roles },
   { label: 'Materials', path: paths.materials.path, icon: ScienceOutlined, roles: paths.materials.roles },
+  { label: 'Customers', path: paths.customers.path, icon: HandshakeOutlined, roles: paths.customers.roles },
+  { label: 'Sets', path: paths.sets.path, icon: ViewModuleOutlined, roles: paths.sets.roles },
+  {
+    label: 'Certificates',
+    path: paths.certificates.path,
+    icon: WorkspacePremiumOutlined,
+    roles: paths.certificates.roles,
+  },
+  { label: 'Replacements', path: paths.replacements.path, icon: ChangeCircleOutlined, roles: paths.replacements.roles },
+  {
+    label: 'Grind requests',
+    path: paths.grindRequests.path,
+    icon: PrecisionManufacturingOutlined,
+    roles: paths.grindRequests.roles,
+  },
   { label: 'People', path: paths.people.path, icon: PeopleAltOutlined, roles: paths.people.roles },
+  { label: 'Outbox', path: paths.outbox.path, icon: OutboxOutlined, roles: paths.outbox.roles },
 ];
 
 /** The items a person holding `roles` may use: one shared role is enough. */

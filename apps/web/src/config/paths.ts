@@ -17,6 +17,45 @@ export const paths = {
     getHref: (next?: string) => (next ? `/sign-in?${new URLSearchParams({ next }).toString()}` : '/sign-in'),
   },
   people: { path: '/people', roles: ['admin'], getHref: () => '/people' },
+  customers: { path: '/customers', roles: ['sales', 'service', 'engineer', 'admin'], getHref: () => '/customers' },
+  customer: {
+    path: '/customers/:customerId',
+    roles: ['sales', 'service', 'engineer', 'admin'],
+    getHref: (customerId: string) => `/customers/${encodeURIComponent(customerId)}`,
+  },
+  sets: {
+    path: '/sets',
+    roles: ['sales', 'service', 'engineer', 'admin'],
+    /** `partNumber` opens the list filtered to one part number. */
+    getHref: (partNumber?: string) =>
+      partNumber ? `/sets?${new URLSearchParams({ partNumber }).toString()}` : '/sets',
+  },
+  /** The set builder: sales (and admin) allocate free parts to a customer's order. */
+  setNew: {
+    path: '/sets/new',
+    roles: ['sales', 'admin'],
+    /** `customerId` opens the builder with that customer already chosen. */
+    getHref: (customerId?: string) =>
+      customerId ? `/sets/new?${new URLSearchParams({ customerId }).toString()}` : '/sets/new',
+  },
+  set: {
+    path: '/sets/:setId',
+    roles: ['sales', 'service', 'engineer', 'admin'],
+    getHref: (setId: string) => `/sets/${encodeURIComponent(setId)}`,
+  },
+  certificates: {
+    path: '/certificates',
+    roles: ['sales', 'service', 'engineer', 'admin'],
+    getHref: () => '/certificates',
+  },
+  /** Public: the page behind a certificate's QR code. */
+  verify: { path: '/verify/:code', getHref: (code: string) => `/verify/${encodeURIComponent(code)}` },
+  outbox: { path: '/outbox', roles: ['admin'], getHref: () => '/outbox' },
+  forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+  resetPassword: {
+    path: '/reset-password',
+    getHref: (token: string) => `/reset-password?${new URLSearchParams({ token }).toString()}`,
+  },
   specs: { path: '/specs', roles: ['engineer', 'inspector'], getHref: () => '/specs' },
   specNew: { path: '/specs/new', roles: WRITE_ROLES.specs, getHref: () => '/specs/new' },
   spec: {
@@ -48,5 +87,17 @@ export const paths = {
     path: '/parts/:partId',
     roles: ['engineer', 'inspector'],
     getHref: (partId: string) => `/parts/${encodeURIComponent(partId)}`,
+  },
+  /** `q` opens the check for a certificate number, set number or serial. */
+  replacements: {
+    path: '/replacements',
+    roles: ['service', 'sales', 'engineer', 'admin'],
+    getHref: (q?: string) => (q ? `/replacements?${new URLSearchParams({ q }).toString()}` : '/replacements'),
+  },
+  grindRequests: { path: '/grind-requests', roles: ROLES, getHref: () => '/grind-requests' },
+  grindRequest: {
+    path: '/grind-requests/:requestId',
+    roles: ROLES,
+    getHref: (requestId: string) => `/grind-requests/${encodeURIComponent(requestId)}`,
   },
 } as const satisfies Record<string, AppPath>;

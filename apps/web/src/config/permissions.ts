@@ -11,4 +11,7 @@ export const WRITE_ROLES = {
   instruments: ['engineer'],
   lots: ['engineer'],
   bench: ['inspector'],
+  replacements: ['service', 'sales'],
+  grindRequests: ['service', 'engineer'],
+  grindSteps: ['engineer', 'inspector', 'service'],
 } as const satisfies Record<string, readonly Role[]>;

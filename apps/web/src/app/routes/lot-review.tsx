@@ -9,6 +9,7 @@ import { paths } from '../../config/paths';
 import { useSignedInUser } from '../../features/auth/hooks/use-signed-in-user';
 import { useLot, useLotParts } from '../../features/lots/api/get-lot';
 import { LotHeightsChart } from '../../features/lots/components/lot-heights-chart';
+import { InterchangeNotice } from '../../features/lots/components/interchange-notice';
 import { LotSummary } from '../../features/lots/components/lot-summary';
 import { PartsGrid } from '../../features/lots/components/parts-grid';
 
@@ -32,10 +33,16 @@ export function LotReviewRoute() {
         </SectionCard>
         <SectionCard
           title="Heights against the band"
-          description="Each part's height with its expanded uncertainty U (k = 2) as an error bar."
+          description="Each part's height with its expanded uncertainty U (k = 2) as an error bar; the shaded band holds the heights that match sets sold before."
         >
-          <LotHeightsChart spec={lot.spec} parts={chartParts.data?.items ?? []} unit={displayUnit} />
+          <LotHeightsChart
+            spec={lot.spec}
+            window={lot.interchange.window}
+            parts={chartParts.data?.items ?? []}
+            unit={displayUnit}
+          />
         </SectionCard>
+        <InterchangeNotice lot={lot} unit={displayUnit} />
         <PartsGrid lotId={lot.id} unit={displayUnit} />
       </Stack>
     </>

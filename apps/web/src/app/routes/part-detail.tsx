@@ -22,6 +22,7 @@ import { DispositionDialog } from '../../features/lots/components/disposition-di
 import { DispositionHistory } from '../../features/lots/components/disposition-history';
 import { FaceMap } from '../../features/lots/components/face-map';
 import { InspectionHistory } from '../../features/lots/components/inspection-history';
+import { PartMatching } from '../../features/lots/components/part-matching';
 import { ReleaseDialog } from '../../features/lots/components/release-dialog';
 
 const NEEDS_DISPOSITION: ReadonlySet<PartStatus> = new Set(['does-not-conform', 'guard-band', 'held']);
@@ -72,6 +73,7 @@ export function PartDetailRoute() {
           <Typography component="div" sx={{ fontSize: '1.1rem' }}>
             <PartStatusLabel status={part.status} />
           </Typography>
+          <PartMatching part={part} unit={displayUnit} />
         </SectionCard>
         {current?.result.flatness ? (
           <SectionCard

@@ -1,8 +1,9 @@
 import Box from '@mui/material/Box';
+import Link from '@mui/material/Link';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { Navigate, useSearchParams } from 'react-router-dom';
+import { Link as RouterLink, Navigate, useSearchParams } from 'react-router-dom';
 import { EvensetMark } from '../../components/layouts/evenset-mark';
 import { PageLoading } from '../../components/page-loading';
 import { paths } from '../../config/paths';
@@ -86,8 +87,10 @@ export function SignInRoute() {
           </Typography>
           <Typography sx={{ color: 'text.secondary', mb: 3 }}>Use your work e-mail address.</Typography>
           <SignInForm />
-          <Typography variant="body2" sx={{ color: 'text.secondary', mt: 3 }}>
-            Forgotten your password? Ask an administrator to set a new one.
+          <Typography variant="body2" sx={{ mt: 3 }}>
+            <Link component={RouterLink} to={paths.forgotPassword.getHref()}>
+              Forgot your password?
+            </Link>
           </Typography>
         </Paper>
       </Box>

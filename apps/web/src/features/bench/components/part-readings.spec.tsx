@@ -131,6 +131,7 @@ const lot = {
     released: 0,
   },
   heightSpread: null,
+  interchange: { window: null, conflict: false, soldSets: 0, outsideSerials: [] },
 };
 
 const part = { id: 'p1', serial: 'RB40-001' } as PartRow;

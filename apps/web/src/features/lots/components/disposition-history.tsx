@@ -2,13 +2,9 @@ import type { Disposition, DisplayUnit } from '@evenset/contracts';
 import { formatLength } from '@evenset/metrology';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
-import Table from '@mui/material/Table';
-import TableBody from '@mui/material/TableBody';
-import TableCell from '@mui/material/TableCell';
-import TableHead from '@mui/material/TableHead';
-import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
 import { Figures } from '../../../components/display/figures';
+import { GrindPassTable } from './grind-pass-table';
 import { GrindingCautions } from './grinding-cautions';
 
 const KIND_LABELS: Record<Disposition['kind'], string> = {
@@ -17,7 +13,6 @@ const KIND_LABELS: Record<Disposition['kind'], string> = {
   'use-as-is': 'Use as is',
   release: 'Released',
 };
-const PASS_LABELS = { rough: 'Rough', finish: 'Finish', 'spark-out': 'Spark-out' } as const;
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 /** Dispositions and releases of a part, newest first; a rework shows its plan and the cautions. */
@@ -47,30 +42,7 @@ export function DispositionHistory({
               </Typography>
               <GrindingCautions text={d.rework.cautions} />
               {d.rework.passes ? (
-                <Table size="small" aria-label="Grinding passes">
-                  <TableHead>
-                    <TableRow>
-                      <TableCell>Pass</TableCell>
-                      <TableCell>Kind</TableCell>
-                      <TableCell align="right">Depth</TableCell>
-                      <TableCell align="right">Stock left</TableCell>
-                    </TableRow>
-                  </TableHead>
-                  <TableBody>
-                    {d.rework.passes.map((p) => (
-                      <TableRow key={p.pass}>
-                        <TableCell>{p.pass}</TableCell>
-                        <TableCell>{PASS_LABELS[p.kind]}</TableCell>
-                        <TableCell align="right">
-                          <Figures>{length(p.depth)}</Figures>
-                        </TableCell>
-                        <TableCell align="right">
-                          <Figures>{length(p.remaining)}</Figures>
-                        </TableCell>
-                      </TableRow>
-                    ))}
-                  </TableBody>
-                </Table>
+                <GrindPassTable passes={d.rework.passes} unit={unit} />
               ) : (
                 <Typography sx={{ color: 'text.secondary' }}>
                   The spec gives no grinding parameters, so no pass plan.

@@ -1,21 +1,30 @@
+import { GRINDING_CAUTION_ITEMS } from '@evenset/contracts';
 import Alert from '@mui/material/Alert';
 import AlertTitle from '@mui/material/AlertTitle';
 
-/**
- * The usual surface-grinding cautions, shown wherever a rework is asked for; a recorded rework
- * shows the cautions the server stored with it (`text`) instead of the list.
- */
-export function GrindingCautions({ text }: { text?: string | undefined }) {
+interface GrindingCautionsProps {
+  /** A recorded rework's cautions as the server stored them, shown instead of the list. */
+  text?: string | undefined;
+  /** The cautions a grind request carries; the shared list when left out. */
+  items?: readonly string[] | undefined;
+  /** Larger type, for a page the shop floor works from. */
+  prominent?: boolean;
+}
+
+/** The usual surface-grinding cautions, shown wherever a rework or a grind-to-target is asked for. */
+export function GrindingCautions({ text, items = GRINDING_CAUTION_ITEMS, prominent = false }: GrindingCautionsProps) {
   return (
-    <Alert severity="warning" variant="outlined" sx={{ '& li': { mb: 0.25 } }}>
-      <AlertTitle>Before grinding</AlertTitle>
+    <Alert
+      severity="warning"
+      variant="outlined"
+      sx={{ '& li': { mb: 0.25 }, ...(prominent ? { fontSize: '1.05rem', borderWidth: 2 } : {}) }}
+    >
+      <AlertTitle sx={prominent ? { fontSize: '1.15rem', fontWeight: 700 } : undefined}>Before grinding</AlertTitle>
       {text ?? (
         <ul style={{ margin: 0, paddingLeft: 20 }}>
-          <li>Use a wheel rated for the spindle speed, ring-tested before mounting, with its guard in place.</li>
-          <li>Wear eye and face protection.</li>
-          <li>Make sure the part is held on the chuck before starting.</li>
-          <li>Handle coolant as its safety data sheet says.</li>
-          <li>Follow local codes, the machine maker&apos;s instructions and licensed practice.</li>
+          {items.map((item) => (
+            <li key={item}>{item}</li>
+          ))}
         </ul>
       )}
     </Alert>

@@ -5,6 +5,7 @@ import Typography from '@mui/material/Typography';
 import {
   CartesianGrid,
   ErrorBar,
+  ReferenceArea,
   ReferenceLine,
   ResponsiveContainer,
   Scatter,
@@ -17,12 +18,17 @@ import { granite, monoFontFamily, ochre, slate, status } from '../../../theme/to
 
 interface LotHeightsChartProps {
   spec: LotDetail['spec'];
+  /** Heights that still match sets sold before; null when none are sold or they disagree. */
+  window: LotDetail['interchange']['window'];
   parts: readonly PartRow[];
   unit: DisplayUnit;
 }
 
-/** Each inspected part's height with its U as an error bar, against the band and the nominal. */
-export function LotHeightsChart({ spec, parts, unit }: LotHeightsChartProps) {
+/**
+ * Each inspected part's height with its U as an error bar, against the band, the nominal and the
+ * interchange window (shaded).
+ */
+export function LotHeightsChart({ spec, window, parts, unit }: LotHeightsChartProps) {
   const { decimals, symbol } = displayResolution(unit, 'fine');
   const inUnit = (mm: number) => fromMillimetres(mm, unit);
   const lower = inUnit(spec.nominal + spec.band.lower);
@@ -74,6 +80,16 @@ export function LotHeightsChart({ spec, parts, unit }: LotHeightsChartProps) {
             stroke={granite[700]}
             label={{ value: `Height (${symbol})`, angle: -90, position: 'insideLeft', fill: granite[700] }}
           />
+          {window ? (
+            <ReferenceArea
+              y1={inUnit(window.low)}
+              y2={inUnit(window.high)}
+              fill={slate[100]}
+              fillOpacity={0.6}
+              ifOverflow="hidden"
+              label={{ value: 'Matches sets sold before', position: 'insideBottomLeft', fill: slate[800] }}
+            />
+          ) : null}
           <ReferenceLine
             y={upper}
             stroke={status.error}

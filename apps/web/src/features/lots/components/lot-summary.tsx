@@ -4,6 +4,7 @@ import { DetailList } from '../../../components/display/detail-list';
 import { Figures } from '../../../components/display/figures';
 import { PART_STATUS_LABELS } from '../../../components/display/verdict-label';
 import { formatDate } from '../../../lib/format';
+import { WindowText } from './interchange-notice';
 
 /** The lot's spec in brief, its counts and its height spread. */
 export function LotSummary({ lot, unit }: { lot: LotDetail; unit: DisplayUnit }) {
@@ -32,6 +33,7 @@ export function LotSummary({ lot, unit }: { lot: LotDetail; unit: DisplayUnit })
           label: 'Parts',
           value: `${lot.partCount} of ${lot.quantity}${counted.length ? ` — ${counted.join(', ')}` : ''}`,
         },
+        { label: 'Interchange window', value: <WindowText interchange={lot.interchange} unit={unit} /> },
         {
           label: 'Height spread',
           value: heightSpread ? (

@@ -1,5 +1,8 @@
 import type { DisplayUnit, PartRow } from '@evenset/contracts';
 import FlagOutlined from '@mui/icons-material/FlagOutlined';
+import SwapHorizOutlined from '@mui/icons-material/SwapHorizOutlined';
+import Stack from '@mui/material/Stack';
+import Tooltip from '@mui/material/Tooltip';
 import type { GridColDef } from '@mui/x-data-grid';
 import { useMemo } from 'react';
 import { useNavigate } from 'react-router-dom';
@@ -16,6 +19,15 @@ import {
 } from '../../../components/display/verdict-label';
 import { paths } from '../../../config/paths';
 import { useLotParts } from '../api/get-lot';
+
+const OUTSIDE_WINDOW_HINT = 'Would not match sets sold before: the height is outside the interchange window.';
+
+function flagTexts(row: PartRow): string[] {
+  return [
+    ...(row.runFlagged ? ['Drift flag'] : []),
+    ...(row.outsideWindow ? ['Would not match sets sold before'] : []),
+  ];
+}
 
 function partColumns(unit: DisplayUnit): GridColDef<PartRow>[] {
   const sortable = { sortable: true };
@@ -47,13 +59,23 @@ function partColumns(unit: DisplayUnit): GridColDef<PartRow>[] {
       renderCell: ({ row }) => (row.verdict ? <VerdictLabel verdict={row.verdict} /> : '—'),
     },
     {
-      field: 'runFlagged',
-      headerName: 'Run',
-      width: 120,
+      field: 'flags',
+      headerName: 'Flags',
+      width: 200,
       sortable: false,
-      valueGetter: (flagged: boolean) => (flagged ? 'Drift flag' : ''),
-      renderCell: ({ row }) =>
-        row.runFlagged ? <StatusLabel icon={FlagOutlined} label="Drift flag" tone="warning" /> : null,
+      valueGetter: (_value, row) => flagTexts(row).join(', '),
+      renderCell: ({ row }) => (
+        <Stack direction="row" spacing={1} sx={{ height: '100%', alignItems: 'center' }}>
+          {row.runFlagged ? <StatusLabel icon={FlagOutlined} label="Drift flag" tone="warning" /> : null}
+          {row.outsideWindow ? (
+            <Tooltip title={OUTSIDE_WINDOW_HINT}>
+              <span>
+                <StatusLabel icon={SwapHorizOutlined} label="Won't match" tone="warning" />
+              </span>
+            </Tooltip>
+          ) : null}
+        </Stack>
+      ),
     },
     {
       field: 'status',

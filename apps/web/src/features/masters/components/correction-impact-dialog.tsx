@@ -23,7 +23,7 @@ interface CorrectionImpactDialogProps {
   onClose: () => void;
 }
 
-/** After a correction: how many heights were recomputed and which parts changed verdict. */
+/** After a correction: how many heights were recomputed, which parts changed verdict, which certificates change. */
 export function CorrectionImpactDialog({ masterCode, impact, unit, onClose }: CorrectionImpactDialogProps) {
   const height = (mm: number) => formatLength(mm, unit, { level: 'fine', withSymbol: false });
   return (
@@ -72,6 +72,36 @@ export function CorrectionImpactDialog({ masterCode, impact, unit, onClose }: Co
                 ))}
               </TableBody>
             </Table>
+          ) : null}
+          {impact.certificates.length > 0 ? (
+            <>
+              <Typography>
+                {impact.certificates.length === 1
+                  ? 'One certificate cites heights measured against the corrected calibration; its facts no longer read the same.'
+                  : `${impact.certificates.length} certificates cite heights measured against the corrected calibration; their facts no longer read the same.`}{' '}
+                Decide with sales whether to revoke and reissue.
+              </Typography>
+              <Table size="small" aria-label="Certificates whose facts change">
+                <TableHead>
+                  <TableRow>
+                    <TableCell>Certificate</TableCell>
+                    <TableCell>Set</TableCell>
+                    <TableCell>Customer</TableCell>
+                    <TableCell>State</TableCell>
+                  </TableRow>
+                </TableHead>
+                <TableBody>
+                  {impact.certificates.map((c) => (
+                    <TableRow key={c.id}>
+                      <TableCell>{c.certificateNumber}</TableCell>
+                      <TableCell>{c.setNumber}</TableCell>
+                      <TableCell>{c.customerName}</TableCell>
+                      <TableCell>{c.revoked ? 'Already revoked' : 'In force'}</TableCell>
+                    </TableRow>
+                  ))}
+                </TableBody>
+              </Table>
+            </>
           ) : null}
         </Stack>
       </DialogContent>
