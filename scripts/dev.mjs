@@ -4,11 +4,22 @@ import { spawn } from 'node:child_process';
 import { bootstrap } from './bootstrap.mjs';
 import { runMain, step } from './lib/log.mjs';
 import { ROOT } from './lib/paths.mjs';
-import { localSecret } from './lib/secrets.mjs';
+import { startMailSink } from './lib/mail-sink.mjs';
+import { localSecret, localSigningKey } from './lib/secrets.mjs';
 
 await runMain(async () => {
   const urls = await bootstrap();
   step('Dev servers: API on http://127.0.0.1:3000, web on http://127.0.0.1:5173 (Ctrl-C stops both)');
+  const tsNode = {
+    TS_NODE_PROJECT: 'apps/api/tsconfig.json',
+    TS_NODE_SWC: 'true',
+    TS_NODE_TRANSPILE_ONLY: 'true',
+  };
+  const mail = startMailSink(
+    ['-r', 'ts-node/register', '-r', 'tsconfig-paths/register', 'apps/api/src/mail/sink/main.ts'],
+    urls.app,
+    tsNode,
+  );
   const children = [
     spawn(
       process.execPath,
@@ -28,10 +39,10 @@ await runMain(async () => {
         env: {
           ...process.env,
           DATABASE_URL: urls.app,
+          SMTP_URL: mail.smtpUrl,
           SESSION_SECRET: localSecret('session'),
-          TS_NODE_PROJECT: 'apps/api/tsconfig.json',
-          TS_NODE_SWC: 'true',
-          TS_NODE_TRANSPILE_ONLY: 'true',
+          CERTIFICATE_SIGNING_KEY: process.env.CERTIFICATE_SIGNING_KEY ?? localSigningKey(),
+          ...tsNode,
         },
       },
     ),
@@ -40,8 +51,12 @@ await runMain(async () => {
       stdio: 'inherit',
     }),
   ];
-  const stop = (signal) => children.forEach((child) => child.kill(signal));
+  const stop = (signal) => {
+    mail.stop(signal);
+    children.forEach((child) => child.kill(signal));
+  };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);
   await Promise.all(children.map((child) => new Promise((resolve) => child.on('exit', resolve))));
+  mail.stop('SIGTERM');
 });

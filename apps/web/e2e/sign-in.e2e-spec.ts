@@ -2,8 +2,21 @@ import { baseUrl, navigationLinks, openBrowser, OpenBrowser, screenshot, signIn 
 
 // Demo accounts from the seed (apps/api/src/database/seeders/demo-people.ts).
 const DEMO_PASSWORD = 'evenset-demo-1';
-const INSPECTOR_MENU = ['Home', 'Bench', 'Lots', 'Specs', 'Masters', 'Instruments', 'Materials'];
-const ENGINEER_MENU = ['Home', 'Lots', 'Specs', 'Masters', 'Instruments', 'Materials'];
+const INSPECTOR_MENU = ['Home', 'Bench', 'Lots', 'Specs', 'Masters', 'Instruments', 'Materials', 'Grind requests'];
+const ENGINEER_MENU = [
+  'Home',
+  'Lots',
+  'Specs',
+  'Masters',
+  'Instruments',
+  'Materials',
+  'Customers',
+  'Sets',
+  'Certificates',
+  'Replacements',
+  'Grind requests',
+];
+const CUSTOMER_MENU = ['Home', 'Customers', 'Sets', 'Certificates', 'Replacements', 'Grind requests'];
 const NEW_INSPECTOR = {
   email: 'quinn.inspector@kestrel.example',
   name: 'Quinn Ferrand',
@@ -44,11 +57,11 @@ describe('sign-in, roles and people (browser)', () => {
   });
 
   it.each([
-    ['admin@kestrel.example', ['Home', 'People']],
+    ['admin@kestrel.example', [...CUSTOMER_MENU, 'People', 'Outbox']],
     ['engineer@kestrel.example', ENGINEER_MENU],
     ['inspector@kestrel.example', INSPECTOR_MENU],
-    ['sales@kestrel.example', ['Home']],
-    ['service@kestrel.example', ['Home']],
+    ['sales@kestrel.example', CUSTOMER_MENU],
+    ['service@kestrel.example', CUSTOMER_MENU],
   ])('%s sees only their own navigation', async (email, expected) => {
     const { page } = browser;
     await signIn(page, email, DEMO_PASSWORD);

@@ -1,5 +1,5 @@
 import { spawn, spawnSync } from 'node:child_process';
-import { randomBytes } from 'node:crypto';
+import { generateKeyPairSync, randomBytes } from 'node:crypto';
 import { join } from 'node:path';
 import { Client } from 'pg';
 
@@ -10,6 +10,25 @@ export interface StartedServer {
   baseUrl: string;
   pid: number;
   database: string;
+  /** Where the app sends mail: the local mail catcher, started in this process. */
+  smtpUrl: string;
+}
+
+interface MailSink {
+  port: number;
+  close(): Promise<void>;
+}
+type MailSinkModule = { startMailSink(options: { port: number; databaseUrl: string }): Promise<MailSink> };
+
+// The catcher runs in the test runner's process; global setup and teardown share it through here.
+const sinks: Map<string, MailSink> = ((globalThis as { evensetMailSinks?: Map<string, MailSink> }).evensetMailSinks ??=
+  new Map());
+
+/** The compiled catcher from the built API, the same code `npm start` runs. */
+async function startMailSink(databaseUrl: string): Promise<MailSink> {
+  const modulePath = join(ROOT, 'apps/api/dist/mail/sink/mail-sink.js');
+  const { startMailSink: start } = (await import(modulePath)) as MailSinkModule;
+  return start({ port: 0, databaseUrl });
 }
 
 function withDatabase(url: string, name: string): string {
@@ -51,11 +70,16 @@ export async function startServer(env: Record<string, string> = {}): Promise<Sta
   const database = `${template}_browser_${randomBytes(4).toString('hex')}`;
   await onServer(`create database "${database}" template "${template}"`);
   const databaseUrl = withDatabase(TEMPLATE_URL, database);
+  // One certificate key for the seed (which issues demo certificates) and the server that verifies them.
+  const signingKey = generateKeyPairSync('ed25519').privateKey.export({ format: 'pem', type: 'pkcs8' }).toString();
   const seeded = spawnSync(process.execPath, [join(ROOT, 'apps/api/dist/database/cli.js'), 'seed'], {
-    env: { ...process.env, DATABASE_URL: databaseUrl },
+    env: { ...process.env, DATABASE_URL: databaseUrl, CERTIFICATE_SIGNING_KEY: signingKey },
     encoding: 'utf8',
   });
   if (seeded.status !== 0) throw new Error(`Seeding the browser-test database failed:\n${seeded.stderr}`);
+  const sink = await startMailSink(databaseUrl);
+  sinks.set(database, sink);
+  const smtpUrl = `smtp://127.0.0.1:${sink.port}`;
   const port = 43000 + Math.floor(Math.random() * 1000);
   const child = spawn(process.execPath, [join(ROOT, 'apps/api/dist/main.js')], {
     env: {
@@ -66,14 +90,21 @@ export async function startServer(env: Record<string, string> = {}): Promise<Sta
       DATABASE_URL: databaseUrl,
       WEB_DIST: join(ROOT, 'apps/web/dist'),
       SESSION_SECRET: randomBytes(32).toString('hex'),
+      CERTIFICATE_SIGNING_KEY: signingKey,
       LOG_LEVEL: 'error',
+      SMTP_URL: smtpUrl,
       ...env,
     },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const baseUrl = `http://127.0.0.1:${port}`;
   await waitForHealth(baseUrl, 30_000);
-  return { baseUrl, pid: child.pid!, database };
+  return { baseUrl, pid: child.pid!, database, smtpUrl };
+}
+
+/** The connection URL of a started server's own database, for tests that reach past the app. */
+export function databaseUrlOf(server: StartedServer): string {
+  return withDatabase(TEMPLATE_URL, server.database);
 }
 
 export async function stopServer(server: StartedServer): Promise<void> {
@@ -83,5 +114,7 @@ export async function stopServer(server: StartedServer): Promise<void> {
     // already gone
   }
   await new Promise((resolve) => setTimeout(resolve, 500));
+  await sinks.get(server.database)?.close();
+  sinks.delete(server.database);
   await onServer(`drop database if exists "${server.database}" with (force)`);
 }
