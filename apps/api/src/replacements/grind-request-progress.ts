@@ -4,7 +4,7 @@ import type { GrindRequestDetail, GrindRequestStatus } from '@evenset/contracts'
 import { PartStatusService } from '../lots/part-status';
 import { GrindRequestStep } from './grind-request-step.entity';
 import type { GrindRequest } from './grind-request.entity';
-import { inWindow } from './replacement-window';
+import { inWindow } from '../sets/interchange.service';
 
 export interface Progress {
   status: GrindRequestStatus;
@@ -49,7 +49,7 @@ export class GrindRequestProgress {
                 inspectionId: inspection.id,
                 height: result.heightMm,
                 verdict: result.verdict,
-                insideWindow: inWindow(result.heightMm, { low: request.windowLowMm, high: request.windowHighMm }),
+                insideWindow: inWindow({ low: request.windowLowMm, high: request.windowHighMm }, result.heightMm),
                 inspector: inspection.inspectorName,
                 inspectedAt: inspection.createdAt.toISOString(),
               }

@@ -22,7 +22,7 @@ import { GrindRequestProgress, type Progress } from './grind-request-progress';
 import { nextGrindRequestNumber } from './grind-request-number';
 import { GrindRequestStep } from './grind-request-step.entity';
 import { GrindRequest } from './grind-request.entity';
-import { inWindow } from './replacement-window';
+import { inWindow } from '../sets/interchange.service';
 import { GrindRequestStepRefusedException, ReplacementRefusedException } from './replacements.exception';
 import { ReplacementsService } from './replacements.service';
 import { lockRow } from './row-lock';
@@ -62,7 +62,7 @@ export class GrindRequestsService {
       await em.populate(part, ['lot']);
       const unit = sold.spec.displayUnit;
       const show = (mm: number) => formatLength(mm, unit, { level: 'fine' });
-      if (inWindow(free.height, window))
+      if (inWindow(window, free.height))
         throw new ReplacementRefusedException(
           `Part ${part.serial} already fits set ${sold.set.setNumber} (${show(free.height)}); send it as a replacement instead of grinding it.`,
         );

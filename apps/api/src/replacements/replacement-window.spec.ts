@@ -1,4 +1,5 @@
-import { inWindow, replacementWindow } from './replacement-window';
+import { inWindow } from '../sets/interchange.service';
+import { replacementWindow } from './replacement-window';
 
 // Expected values worked by hand from the brief's definition ("Matching"): a new height h matches
 // a set within the band when highest − band ≤ h ≤ lowest + band; a replacement must also lie in
@@ -48,9 +49,9 @@ describe('replacementWindow', () => {
 
   it('counts the window’s limits as inside', () => {
     const window = { low: 38.09246, high: 38.1 };
-    expect(inWindow(38.09246, window)).toBe(true);
-    expect(inWindow(38.1, window)).toBe(true);
-    expect(inWindow(38.0924599, window)).toBe(false);
-    expect(inWindow(38.1000001, window)).toBe(false);
+    expect(inWindow(window, 38.09246)).toBe(true);
+    expect(inWindow(window, 38.1)).toBe(true);
+    expect(inWindow(window, 38.0924599)).toBe(false);
+    expect(inWindow(window, 38.1000001)).toBe(false);
   });
 });

@@ -59,9 +59,3 @@ export function replacementWindow(
     explanation: `A replacement must measure ${range(window)}: within ${show(band)} of every part of the set${cut}.`,
   };
 }
-
-/** Whether a height lies in a window, with the same few-ulps allowance as the window itself. */
-export function inWindow(height: number, window: HeightWindow): boolean {
-  const s = slack(height, window.low, window.high);
-  return height >= window.low - s && height <= window.high + s;
-}

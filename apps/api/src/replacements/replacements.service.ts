@@ -21,7 +21,7 @@ import { SetMember } from '../sets/set-member.entity';
 import { lockFreeStock, nextSetNumber } from '../sets/set-number';
 import { GrindRequestProgress } from './grind-request-progress';
 import { GrindRequest } from './grind-request.entity';
-import { inWindow } from './replacement-window';
+import { inWindow } from '../sets/interchange.service';
 import { lockRow } from './row-lock';
 import {
   NotSoldException,
@@ -94,7 +94,7 @@ export class ReplacementsService {
       const sold = await this.originalSet(input.originalSetId);
       const { set, window } = sold;
       const { part, free } = await this.usablePart(em, sold, input.partId);
-      if (!window.window || !inWindow(free.height, window.window))
+      if (!window.window || !inWindow(window.window, free.height))
         throw new ReplacementRefusedException(
           window.window
             ? `Part ${part.serial} measures ${this.show(sold, free.height)}, outside the window ${this.show(sold, window.window.low)} to ${this.show(sold, window.window.high)}. Choose a part from the list of fitting parts.`

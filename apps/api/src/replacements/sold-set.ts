@@ -8,7 +8,8 @@ import { MatchedSet } from '../sets/matched-set.entity';
 import { SetMember } from '../sets/set-member.entity';
 import { latestRevision } from '../specs/spec-revision';
 import type { Spec } from '../specs/spec.entity';
-import { inWindow, replacementWindow, type ReplacementWindow } from './replacement-window';
+import { inWindow } from '../sets/interchange.service';
+import { replacementWindow, type ReplacementWindow } from './replacement-window';
 
 /** A sold set with what a replacement for it must meet. */
 export interface SoldSet {
@@ -67,14 +68,14 @@ export class SoldSets {
   static fits(parts: FreePart[], sold: SoldSet): FreePart[] {
     const { window, centre } = sold.window;
     if (!window || centre === null) return [];
-    return parts.filter((p) => inWindow(p.height, window)).sort(byDistanceTo(centre));
+    return parts.filter((p) => inWindow(window, p.height)).sort(byDistanceTo(centre));
   }
 
   /** Free released parts above the window: grinding can bring them down into it. Closest first. */
   static grindable(parts: FreePart[], sold: SoldSet): FreePart[] {
     const { window, centre } = sold.window;
     if (!window || centre === null) return [];
-    return parts.filter((p) => p.height > window.high && !inWindow(p.height, window)).sort(byDistanceTo(centre));
+    return parts.filter((p) => p.height > window.high && !inWindow(window, p.height)).sort(byDistanceTo(centre));
   }
 }
 
