@@ -47,12 +47,15 @@ export async function openBrowser(viewport = { width: 1366, height: 860 }): Prom
   };
 }
 
-export async function screenshot(page: Page, name: string): Promise<string> {
-  mkdirSync(SCREENSHOTS, { recursive: true });
-  const path = join(SCREENSHOTS, `${name}.png`);
+export async function screenshot(page: Page, name: string, dir = SCREENSHOTS): Promise<string> {
+  mkdirSync(dir, { recursive: true });
+  const path = join(dir, `${name}.png`);
   await page.screenshot({ path, fullPage: true });
   return path;
 }
+
+/** Where the user guide's pictures live: the guide's browser test takes them from the real app. */
+export const GUIDE_IMAGES = join(ROOT, 'docs', 'images');
 
 export async function signIn(page: Page, email: string, password: string): Promise<void> {
   await page.goto(`${baseUrl()}/sign-in`);
