@@ -18,7 +18,9 @@ import { ContractValidationPipe } from './common/validation.pipe';
 import { AppConfig } from './config/app-config.service';
 import { AppConfigModule } from './config/config.module';
 import { ormConfig } from './database/mikro-orm.config';
+import { GaugeStudiesModule } from './gauge-studies/gauge-studies.module';
 import { HealthModule } from './health/health.module';
+import { HomeModule } from './home/home.module';
 import { InspectionsModule } from './inspections/inspections.module';
 import { InstrumentsModule } from './instruments/instruments.module';
 import { CustomersModule } from './customers/customers.module';
@@ -30,6 +32,7 @@ import { MastersModule } from './masters/masters.module';
 import { MaterialsModule } from './materials/materials.module';
 import { SessionModule } from './session/session.module';
 import { SpecsModule } from './specs/specs.module';
+import { TrendsModule } from './trends/trends.module';
 import { UsersModule } from './users/users.module';
 
 const DEFAULT_WEB_DIST = join(__dirname, '../../web/dist');
@@ -93,6 +96,9 @@ export class AppModule {
         SetsModule,
         CertificatesModule,
         ReplacementsModule,
+        TrendsModule,
+        HomeModule,
+        GaugeStudiesModule,
         HealthModule,
       ],
       providers: [

@@ -55,13 +55,21 @@ describe('demo data', () => {
     const materials = await engineer.agent.get('/api/materials').expect(200);
     expect(materials.body.total).toBe(7);
     const instruments = await engineer.agent.get('/api/instruments').query({ usable: 'true' }).expect(200);
-    expect(instruments.body.total).toBe(2);
+    expect(instruments.body.total).toBe(3);
 
     // The lots tell the story through the server's own results (brief, demo scenario).
     const lots = await engineer.agent.get('/api/lots').query({ sort: 'lotNumber:asc' }).expect(200);
     expect(
       lots.body.items.map((l: { lotNumber: string; partCount: number }) => `${l.lotNumber} ${l.partCount}`),
-    ).toEqual(['L-2025-118 4', 'L-2025-131 2', 'L-2026-041 6', 'L-2026-044 4', 'L-2026-047 4', 'L-2026-052 8']);
+    ).toEqual([
+      'L-2025-118 4',
+      'L-2025-131 2',
+      'L-2026-041 6',
+      'L-2026-044 4',
+      'L-2026-047 4',
+      'L-2026-052 8',
+      'L-2026-GS1 10',
+    ]);
     const lotId = (lotNumber: string) =>
       (lots.body.items as { id: string; lotNumber: string }[]).find((l) => l.lotNumber === lotNumber)!.id;
     const lot041 = lotId('L-2026-041');

@@ -15,3 +15,7 @@ export * from './sets.schema';
 export * from './mail.schema';
 export * from './certificates.schema';
 export * from './replacements.schema';
+export * from './audit.schema';
+export * from './home.schema';
+export * from './gauge-studies.schema';
+export * from './trends.schema';

@@ -52,3 +52,7 @@ export type ChangeRolesInput = z.infer<typeof changeRolesSchema>;
 
 export const resetPasswordSchema = z.object({ password: newPasswordSchema });
 export type ResetPasswordInput = z.infer<typeof resetPasswordSchema>;
+
+/** `PATCH /api/me/preferences` (every signed-in person, for themselves) → SessionUser. */
+export const preferencesSchema = z.object({ displayUnit: displayUnitSchema });
+export type PreferencesInput = z.infer<typeof preferencesSchema>;

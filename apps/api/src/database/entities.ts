@@ -12,6 +12,9 @@ import { GrindRequest } from '../replacements/grind-request.entity';
 import { MatchedSet } from '../sets/matched-set.entity';
 import { SetMember } from '../sets/set-member.entity';
 import { AuditEntry } from '../audit/audit-entry.entity';
+import { GaugeStudyMeasurement } from '../gauge-studies/gauge-study-measurement.entity';
+import { GaugeStudySlot } from '../gauge-studies/gauge-study-slot.entity';
+import { GaugeStudy } from '../gauge-studies/gauge-study.entity';
 import { BenchRun } from '../inspections/bench-run.entity';
 import { InspectionReading } from '../inspections/inspection-reading.entity';
 import { InspectionResult } from '../inspections/inspection-result.entity';
@@ -57,4 +60,7 @@ export const ENTITIES = [
   CapturedMail,
   GrindRequest,
   GrindRequestStep,
+  GaugeStudy,
+  GaugeStudySlot,
+  GaugeStudyMeasurement,
 ];

@@ -30,6 +30,13 @@ export const DEMO_PEOPLE: UserSeed[] = [
     password: DEMO_PASSWORD,
   },
   {
+    // The third appraiser of the demo gauge study (demo-gauge-study.ts).
+    email: 'inspector3@kestrel.example',
+    displayName: 'Ivo Brannigan',
+    roles: ['inspector'],
+    password: DEMO_PASSWORD,
+  },
+  {
     email: 'sales@kestrel.example',
     displayName: 'Priya Castellan',
     roles: ['sales'],

@@ -6,6 +6,7 @@ import { ensureMaterial } from '../factories/material.factory';
 import { ensureSpec } from '../factories/spec.factory';
 import { ensureUser } from '../factories/user.factory';
 import { demoInstruments, demoMasters } from './demo-gauges';
+import { seedDemoGaugeStudy } from './demo-gauge-study';
 import { seedDemoLots } from './demo-lots';
 import { seedDemoSales } from './demo-sales';
 import { DEMO_PEOPLE } from './demo-people';
@@ -43,5 +44,6 @@ export class DemoSeeder extends Seeder {
     await em.flush();
     await seedDemoLots(em);
     await seedDemoSales(em);
+    await seedDemoGaugeStudy(em);
   }
 }

@@ -1,0 +1,219 @@
+import { EntityManager } from '@mikro-orm/postgresql';
+import { Injectable } from '@nestjs/common';
+import { z } from 'zod';
+import {
+  trendQuerySchema,
+  type Trend,
+  type TrendCapability,
+  type TrendPartNumber,
+  type TrendPoint,
+} from '@evenset/contracts';
+import { capability } from '@evenset/metrology';
+import { NotFoundException } from '../common/errors/domain.exception';
+import { PartStatusService } from '../lots/part-status';
+import { Part } from '../lots/part.entity';
+import { SetMember } from '../sets/set-member.entity';
+import { Spec } from '../specs/spec.entity';
+import { histogram, individualsChart, signalsOf, subgroupChart, type Group } from './trend-charts';
+
+type TrendFilters = z.output<typeof trendQuerySchema>;
+
+/** Fewer values than this behind Cp/Cpk draw a warning (common practice: about 30). */
+export const FEW_VALUES = 30;
+
+interface Row extends TrendPoint {
+  grindDate: string;
+  setCreatedAt: Date | null;
+}
+
+/**
+ * Trends of part height per part number, read from the records: each part's current height (the
+ * newest result of its newest inspection no correction superseded), whatever its later status.
+ */
+@Injectable()
+export class TrendsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly states: PartStatusService,
+  ) {}
+
+  /** Part numbers with a released revision, the ones a trend can be drawn against. */
+  async partNumbers(): Promise<{ items: TrendPartNumber[] }> {
+    const specs = await this.em.find(Spec, { status: 'released' }, { orderBy: { partNumber: 'asc', revision: 'asc' } });
+    return {
+      items: specs.map((s) => ({ partNumber: s.partNumber, revision: s.revision, title: s.title })),
+    };
+  }
+
+  async trend(partNumber: string, filters: TrendFilters): Promise<Trend> {
+    const specs = await this.em.find(Spec, { partNumber }, { orderBy: { releasedAt: 'desc', createdAt: 'desc' } });
+    if (!specs.length) throw new NotFoundException(`Part number ${partNumber}`);
+    const released = specs.find((s) => s.status === 'released') ?? null;
+
+    const all = await this.rows(partNumber);
+    const rows = all.filter((r) => matches(r, filters));
+    const points: TrendPoint[] = rows.map(({ grindDate: _g, setCreatedAt: _s, ...point }) => point);
+    const heights = points.map((p) => p.height);
+    const serials = points.map((p) => p.serial);
+
+    const subgroups = subgroupChart(filters.subgroup, groupsOf(rows, filters.subgroup));
+    const chart = individualsChart(heights);
+    const signals = [
+      ...(subgroups.xbar
+        ? signalsOf(
+            'xbar',
+            subgroups.subgroups.map((g) => g.mean),
+            subgroups.xbar,
+            subgroups.subgroups.map((g) => g.label),
+          )
+        : []),
+      ...(chart ? signalsOf('individuals', heights, chart.individuals, serials) : []),
+    ];
+
+    const band = released
+      ? {
+          id: released.id,
+          revision: released.revision,
+          nominal: released.nominalMm,
+          lower: released.nominalMm + released.bandLowerMm,
+          upper: released.nominalMm + released.bandUpperMm,
+        }
+      : null;
+    const { capability: cap, note } = capabilityOf(heights, band);
+
+    return {
+      partNumber,
+      spec: band,
+      points,
+      subgroups,
+      individuals: chart,
+      signals,
+      capability: cap,
+      capabilityNote: note,
+      histogram: histogram(heights),
+      choices: choicesOf(all),
+    };
+  }
+
+  /** Every measured part of the part number, in chart order: lots by grind date, then inspection time. */
+  private async rows(partNumber: string): Promise<Row[]> {
+    const parts = await this.em.find(Part, { partNumber }, { populate: ['lot'] });
+    const states = await this.states.states(parts);
+    const members = parts.length
+      ? await this.em.find(
+          SetMember,
+          { part: { $in: parts.map((p) => p.id) }, set: { kind: 'set' } },
+          { populate: ['set'] },
+        )
+      : [];
+    const setOf = new Map(members.map((m) => [m.part.id, m.set]));
+    const rows: Row[] = [];
+    for (const { part, inspection, result } of states) {
+      if (!inspection || !result) continue;
+      const set = setOf.get(part.id) ?? null;
+      const master = inspection.run.master;
+      rows.push({
+        partId: part.id,
+        serial: part.serial,
+        lotId: part.lot.id,
+        lotNumber: part.lot.lotNumber,
+        setNumber: set?.setNumber ?? null,
+        inspectorId: inspection.inspectorId,
+        inspectorName: inspection.inspectorName,
+        masterId: master.id,
+        masterCode: master.code,
+        inspectedAt: inspection.createdAt.toISOString(),
+        height: result.computed.height,
+        grindDate: part.lot.grindDate,
+        setCreatedAt: set?.createdAt ?? null,
+      });
+    }
+    return rows.sort(
+      (a, b) =>
+        a.grindDate.localeCompare(b.grindDate) ||
+        a.lotNumber.localeCompare(b.lotNumber) ||
+        a.inspectedAt.localeCompare(b.inspectedAt) ||
+        a.serial.localeCompare(b.serial),
+    );
+  }
+}
+
+function matches(row: Row, f: TrendFilters): boolean {
+  const day = row.inspectedAt.slice(0, 10);
+  if (f.from && day < f.from) return false;
+  if (f.to && day > f.to) return false;
+  if (f.lotIds?.length && !f.lotIds.includes(row.lotId)) return false;
+  if (f.masterId && row.masterId !== f.masterId) return false;
+  if (f.inspector) {
+    const who = f.inspector.toLowerCase();
+    if (row.inspectorId !== f.inspector && row.inspectorName.toLowerCase() !== who) return false;
+  }
+  return true;
+}
+
+/** Subgroups by lot (in chart order) or by sold set (in order of sale); parts in no set are not grouped. */
+function groupsOf(rows: readonly Row[], basis: 'lot' | 'set'): Group[] {
+  const groups = new Map<string, Group & { order: number }>();
+  for (const row of rows) {
+    const label = basis === 'lot' ? row.lotNumber : row.setNumber;
+    if (label === null) continue;
+    const order = basis === 'lot' ? groups.size : (row.setCreatedAt?.getTime() ?? 0);
+    const group = groups.get(label) ?? { label, serials: [], heights: [], order };
+    group.serials.push(row.serial);
+    group.heights.push(row.height);
+    groups.set(label, group);
+  }
+  return [...groups.values()]
+    .sort((a, b) => a.order - b.order || a.label.localeCompare(b.label))
+    .map(({ label, serials, heights }) => ({ label, serials, heights }));
+}
+
+/**
+ * Cp and Cpk against the released band, σ the sample standard deviation of the heights
+ * (NIST/SEMATECH e-Handbook §6.1.6, through `capability` of @evenset/metrology).
+ */
+function capabilityOf(
+  heights: readonly number[],
+  band: { revision: string; lower: number; upper: number } | null,
+): { capability: TrendCapability | null; note: string | null } {
+  if (!band) return { capability: null, note: 'This part number has no released revision, so there is no band.' };
+  if (heights.length < 2) return { capability: null, note: 'Capability needs at least 2 heights.' };
+  const low = Math.min(...heights);
+  if (Math.max(...heights) - low < 1e-12)
+    return { capability: null, note: 'Every height is the same, so their spread gives no capability figure.' };
+  const c = capability(heights, band.lower, band.upper);
+  const fewValues = c.count < FEW_VALUES;
+  return {
+    capability: {
+      revision: band.revision,
+      lower: band.lower,
+      upper: band.upper,
+      count: c.count,
+      mean: c.mean,
+      sigma: c.sigma,
+      cp: c.cp,
+      cpk: c.cpk,
+      fewValues,
+      warning: fewValues
+        ? `Only ${c.count} values: common practice wants about ${FEW_VALUES} or more before trusting Cp and Cpk; read them as a first estimate.`
+        : null,
+    },
+    note: null,
+  };
+}
+
+function choicesOf(rows: readonly Row[]): Trend['choices'] {
+  const lots = new Map<string, string>();
+  const inspectors = new Map<string, { id: string | null; name: string }>();
+  const masters = new Map<string, string>();
+  for (const r of rows) {
+    lots.set(r.lotId, r.lotNumber);
+    inspectors.set(r.inspectorId ?? r.inspectorName, { id: r.inspectorId, name: r.inspectorName });
+    masters.set(r.masterId, r.masterCode);
+  }
+  return {
+    lots: [...lots].map(([id, lotNumber]) => ({ id, lotNumber })),
+    inspectors: [...inspectors.values()].sort((a, b) => a.name.localeCompare(b.name)),
+    masters: [...masters].map(([id, code]) => ({ id, code })).sort((a, b) => a.code.localeCompare(b.code)),
+  };
+}
