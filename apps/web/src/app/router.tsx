@@ -15,6 +15,7 @@ const PeopleRoute = lazy(() => import('./routes/people').then((m) => ({ default:
 const CertificatesRoute = lazy(() => import('./routes/certificates').then((m) => ({ default: m.CertificatesRoute })));
 const VerifyRoute = lazy(() => import('./routes/verify').then((m) => ({ default: m.VerifyRoute })));
 const OutboxRoute = lazy(() => import('./routes/outbox').then((m) => ({ default: m.OutboxRoute })));
+const AuditLogRoute = lazy(() => import('./routes/audit-log').then((m) => ({ default: m.AuditLogRoute })));
 const ForgotPasswordRoute = lazy(() =>
   import('./routes/forgot-password').then((m) => ({ default: m.ForgotPasswordRoute })),
 );
@@ -47,6 +48,12 @@ const GrindRequestsRoute = lazy(() =>
   import('./routes/grind-requests').then((m) => ({ default: m.GrindRequestsRoute })),
 );
 const GrindRequestRoute = lazy(() => import('./routes/grind-request').then((m) => ({ default: m.GrindRequestRoute })));
+const GaugeStudiesRoute = lazy(() => import('./routes/gauge-studies').then((m) => ({ default: m.GaugeStudiesRoute })));
+const GaugeStudyRoute = lazy(() => import('./routes/gauge-study').then((m) => ({ default: m.GaugeStudyRoute })));
+const GaugeStudyBenchRoute = lazy(() =>
+  import('./routes/gauge-study-bench').then((m) => ({ default: m.GaugeStudyBenchRoute })),
+);
+const TrendsRoute = lazy(() => import('./routes/trends').then((m) => ({ default: m.TrendsRoute })));
 const NotFoundRoute = lazy(() => import('./routes/not-found').then((m) => ({ default: m.NotFoundRoute })));
 
 /** A page open only to the roles its path names. */
@@ -83,6 +90,7 @@ const router = createBrowserRouter([
               guarded(paths.people, <PeopleRoute />),
               guarded(paths.certificates, <CertificatesRoute />),
               guarded(paths.outbox, <OutboxRoute />),
+              guarded(paths.auditLog, <AuditLogRoute />),
               guarded(paths.specs, <SpecsRoute />),
               guarded(paths.specNew, <SpecNewRoute />),
               guarded(paths.spec, <SpecDetailRoute />),
@@ -101,6 +109,10 @@ const router = createBrowserRouter([
               guarded(paths.setNew, <SetBuilderRoute />),
               guarded(paths.set, <SetDetailRoute />),
               guarded(paths.replacements, <ReplacementCheckRoute />),
+              guarded(paths.trends, <TrendsRoute />),
+              guarded(paths.gaugeStudies, <GaugeStudiesRoute />),
+              guarded(paths.gaugeStudy, <GaugeStudyRoute />),
+              guarded(paths.gaugeStudyBench, <GaugeStudyBenchRoute />),
               guarded(paths.grindRequests, <GrindRequestsRoute />),
               guarded(paths.grindRequest, <GrindRequestRoute />),
               { path: '*', element: <NotFoundRoute /> },

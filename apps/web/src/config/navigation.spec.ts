@@ -4,16 +4,18 @@ import { navigationFor, type NavItem } from './navigation';
 const labels = (items: readonly NavItem[]): string[] => items.map((item) => item.label);
 
 describe('navigationFor', () => {
-  it('shows an admin Home, the customer pages, People and the Outbox', () => {
+  it('shows an admin Home, the customer pages, People, the Outbox and the audit log', () => {
     expect(labels(navigationFor(['admin']))).toEqual([
       'Home',
       'Customers',
       'Sets',
       'Certificates',
       'Replacements',
+      'Trends',
       'Grind requests',
       'People',
       'Outbox',
+      'Audit log',
     ]);
   });
 
@@ -32,6 +34,7 @@ describe('navigationFor', () => {
       'Masters',
       'Instruments',
       'Materials',
+      'Trends',
       'Grind requests',
     ]);
     expect(labels(navigationFor(['engineer']))).toEqual([
@@ -45,7 +48,10 @@ describe('navigationFor', () => {
       'Sets',
       'Certificates',
       'Replacements',
+      'Trends',
+      'Gauge studies',
       'Grind requests',
+      'Audit log',
     ]);
     const customerPages = ['Home', 'Customers', 'Sets', 'Certificates', 'Replacements', 'Grind requests'];
     expect(labels(navigationFor(['sales']))).toEqual(customerPages);
@@ -65,9 +71,11 @@ describe('navigationFor', () => {
       'Sets',
       'Certificates',
       'Replacements',
+      'Trends',
       'Grind requests',
       'People',
       'Outbox',
+      'Audit log',
     ]);
   });
 

@@ -7,11 +7,14 @@ import HandshakeOutlined from '@mui/icons-material/HandshakeOutlined';
 import ViewModuleOutlined from '@mui/icons-material/ViewModuleOutlined';
 import WorkspacePremiumOutlined from '@mui/icons-material/WorkspacePremiumOutlined';
 import OutboxOutlined from '@mui/icons-material/OutboxOutlined';
+import HistoryOutlined from '@mui/icons-material/HistoryOutlined';
 import ChangeCircleOutlined from '@mui/icons-material/ChangeCircleOutlined';
+import InsightsOutlined from '@mui/icons-material/InsightsOutlined';
 import PrecisionManufacturingOutlined from '@mui/icons-material/PrecisionManufacturingOutlined';
 import ArchitectureOutlined from '@mui/icons-material/ArchitectureOutlined';
 import ScienceOutlined from '@mui/icons-material/ScienceOutlined';
 import SpeedOutlined from '@mui/icons-material/SpeedOutlined';
+import RuleOutlined from '@mui/icons-material/RuleOutlined';
 import StraightenOutlined from '@mui/icons-material/StraightenOutlined';
 import type { SvgIconComponent } from '@mui/icons-material';
 import { paths } from './paths';
@@ -41,6 +44,8 @@ export const navigation: readonly NavItem[] = [
     roles: paths.certificates.roles,
   },
   { label: 'Replacements', path: paths.replacements.path, icon: ChangeCircleOutlined, roles: paths.replacements.roles },
+  { label: 'Trends', path: paths.trends.path, icon: InsightsOutlined, roles: paths.trends.roles },
+  { label: 'Gauge studies', path: paths.gaugeStudies.path, icon: RuleOutlined, roles: paths.gaugeStudies.roles },
   {
     label: 'Grind requests',
     path: paths.grindRequests.path,
@@ -49,6 +54,7 @@ export const navigation: readonly NavItem[] = [
   },
   { label: 'People', path: paths.people.path, icon: PeopleAltOutlined, roles: paths.people.roles },
   { label: 'Outbox', path: paths.outbox.path, icon: OutboxOutlined, roles: paths.outbox.roles },
+  { label: 'Audit log', path: paths.auditLog.path, icon: HistoryOutlined, roles: paths.auditLog.roles },
 ];
 
 /** The items a person holding `roles` may use: one shared role is enough. */

@@ -51,6 +51,13 @@ export const paths = {
   /** Public: the page behind a certificate's QR code. */
   verify: { path: '/verify/:code', getHref: (code: string) => `/verify/${encodeURIComponent(code)}` },
   outbox: { path: '/outbox', roles: ['admin'], getHref: () => '/outbox' },
+  /** `subjectId` opens the log filtered to one record's changes. */
+  auditLog: {
+    path: '/audit-log',
+    roles: ['engineer', 'admin'],
+    getHref: (subjectId?: string) =>
+      subjectId ? `/audit-log?${new URLSearchParams({ subjectId }).toString()}` : '/audit-log',
+  },
   forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
   resetPassword: {
     path: '/reset-password',
@@ -93,6 +100,25 @@ export const paths = {
     path: '/replacements',
     roles: ['service', 'sales', 'engineer', 'admin'],
     getHref: (q?: string) => (q ? `/replacements?${new URLSearchParams({ q }).toString()}` : '/replacements'),
+  },
+  /** `partNumber` opens the trend of that part number. */
+  trends: {
+    path: '/trends',
+    roles: ['engineer', 'admin', 'inspector'],
+    getHref: (partNumber?: string) =>
+      partNumber ? `/trends?${new URLSearchParams({ partNumber }).toString()}` : '/trends',
+  },
+  gaugeStudies: { path: '/gauge-studies', roles: ['engineer'], getHref: () => '/gauge-studies' },
+  gaugeStudy: {
+    path: '/gauge-studies/:studyId',
+    roles: ['engineer'],
+    getHref: (studyId: string) => `/gauge-studies/${encodeURIComponent(studyId)}`,
+  },
+  /** An inspector's blind measuring of one study, from the Bench. */
+  gaugeStudyBench: {
+    path: '/bench/gauge-studies/:studyId',
+    roles: ['inspector'],
+    getHref: (studyId: string) => `/bench/gauge-studies/${encodeURIComponent(studyId)}`,
   },
   grindRequests: { path: '/grind-requests', roles: ROLES, getHref: () => '/grind-requests' },
   grindRequest: {

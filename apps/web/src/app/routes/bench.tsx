@@ -1,6 +1,7 @@
 import { PageHeader } from '../../components/page-header';
 import { useSignedInUser } from '../../features/auth/hooks/use-signed-in-user';
 import { BenchFlow } from '../../features/bench/components/bench-flow';
+import { WaitingStudies } from '../../features/gauge-studies/components/waiting-studies';
 
 export function BenchRoute() {
   const { displayUnit } = useSignedInUser();
@@ -10,6 +11,7 @@ export function BenchRoute() {
         title="Bench"
         description="Measure a lot at the surface plate: zero on the master, then part by part."
       />
+      <WaitingStudies />
       <BenchFlow unit={displayUnit} />
     </>
   );

@@ -18,6 +18,7 @@ import type { NavItem } from '../../config/navigation';
 import { paths } from '../../config/paths';
 import { roleList } from '../../lib/roles';
 import { granite, ochre, slate } from '../../theme/tokens';
+import { DisplayUnitMenu } from './display-unit-menu';
 import { EvensetMark } from './evenset-mark';
 import { SideNav } from './side-nav';
 
@@ -94,6 +95,7 @@ export function AppFrame({ user, items, onSignOut, signingOut, children }: AppFr
               {roleList(user.roles)}
             </Typography>
           </Box>
+          <DisplayUnitMenu />
           <Button
             variant="outlined"
             color="inherit"

@@ -3,13 +3,14 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import ArrowForwardOutlined from '@mui/icons-material/ArrowForwardOutlined';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { FieldGrid } from '../../../components/form/field-grid';
 import { FormNumberField } from '../../../components/form/form-number-field';
 import { FormSelectField } from '../../../components/form/form-select-field';
 import { useLots } from '../../lots/api/get-lots';
 import { useUsableInstruments, useUsableMasters } from '../api/bench-choices';
+import { LotSpecLine } from './lot-spec-line';
 
 const setupSchema = createRunSchema.omit({ unit: true, masterStartReading: true });
 export type BenchSetupInput = z.infer<typeof setupSchema>;
@@ -26,6 +27,7 @@ export function BenchSetup({ unit, onReady }: { unit: DisplayUnit; onReady: (set
     resolver: zodResolver(setupSchema),
     defaultValues: { lotId: '', masterId: '', instrumentId: '', masterTemperature: 20, partTemperature: 20 },
   });
+  const lotId = useWatch({ control, name: 'lotId' });
   return (
     <Stack
       component="form"
@@ -45,6 +47,7 @@ export function BenchSetup({ unit, onReady }: { unit: DisplayUnit; onReady: (set
           label: `${lot.lotNumber} — ${lot.spec.partNumber} rev ${lot.spec.revision}, ${lot.partCount} parts`,
         }))}
       />
+      {lotId ? <LotSpecLine lotId={lotId} unit={unit} /> : null}
       <FormSelectField
         control={control}
         name="masterId"
