@@ -2,7 +2,17 @@ import { baseUrl, navigationLinks, openBrowser, OpenBrowser, screenshot, signIn 
 
 // Demo accounts from the seed (apps/api/src/database/seeders/demo-people.ts).
 const DEMO_PASSWORD = 'evenset-demo-1';
-const INSPECTOR_MENU = ['Home', 'Bench', 'Lots', 'Specs', 'Masters', 'Instruments', 'Materials', 'Grind requests'];
+const INSPECTOR_MENU = [
+  'Home',
+  'Bench',
+  'Lots',
+  'Specs',
+  'Masters',
+  'Instruments',
+  'Materials',
+  'Trends',
+  'Grind requests',
+];
 const ENGINEER_MENU = [
   'Home',
   'Lots',
@@ -14,7 +24,10 @@ const ENGINEER_MENU = [
   'Sets',
   'Certificates',
   'Replacements',
+  'Trends',
+  'Gauge studies',
   'Grind requests',
+  'Audit log',
 ];
 const CUSTOMER_MENU = ['Home', 'Customers', 'Sets', 'Certificates', 'Replacements', 'Grind requests'];
 const NEW_INSPECTOR = {
@@ -57,7 +70,21 @@ describe('sign-in, roles and people (browser)', () => {
   });
 
   it.each([
-    ['admin@kestrel.example', [...CUSTOMER_MENU, 'People', 'Outbox']],
+    [
+      'admin@kestrel.example',
+      [
+        'Home',
+        'Customers',
+        'Sets',
+        'Certificates',
+        'Replacements',
+        'Trends',
+        'Grind requests',
+        'People',
+        'Outbox',
+        'Audit log',
+      ],
+    ],
     ['engineer@kestrel.example', ENGINEER_MENU],
     ['inspector@kestrel.example', INSPECTOR_MENU],
     ['sales@kestrel.example', CUSTOMER_MENU],
