@@ -63,6 +63,7 @@ describe('the user guide, walked on the demo data (browser)', () => {
     await page.getByRole('button', { name: 'Sign in' }).waitFor();
     await picture(page, '01-sign-in');
     await as(page, 'engineer@kestrel.example');
+    await page.getByRole('region', { name: 'Masters due or overdue', exact: true }).waitFor();
     await picture(page, '02-home-engineer');
   });
 
@@ -154,7 +155,7 @@ describe('the user guide, walked on the demo data (browser)', () => {
     await picture(page, '11-grind-request');
   });
 
-  it('6. the engineer reads the trend of a part number', async () => {
+  it('6. the engineer reads the trend of a part number and a gauge study', async () => {
     const { page } = browser;
     await as(page, 'engineer@kestrel.example');
     await page.getByRole('navigation').getByRole('link', { name: 'Trends' }).click();
@@ -162,6 +163,10 @@ describe('the user guide, walked on the demo data (browser)', () => {
     await page.getByRole('table', { name: 'Control limits' }).waitFor();
     await page.getByRole('figure', { name: 'X-bar chart' }).locator('svg.recharts-surface').waitFor();
     await picture(page, '12-trends');
+    await page.getByRole('navigation').getByRole('link', { name: 'Gauge studies' }).click();
+    await page.getByRole('link', { name: 'RB-40 height, three inspectors' }).click();
+    await page.getByRole('table', { name: 'Analysis of variance' }).waitFor();
+    await picture(page, '13-gauge-study');
   });
 
   it('7. the admin sees what the app sent', async () => {
@@ -169,6 +174,6 @@ describe('the user guide, walked on the demo data (browser)', () => {
     await as(page, 'admin@kestrel.example');
     await page.getByRole('navigation').getByRole('link', { name: 'Outbox' }).click();
     await page.getByRole('grid', { name: 'Sent by Evenset' }).getByText('Sent', { exact: true }).first().waitFor();
-    await picture(page, '13-outbox');
+    await picture(page, '14-outbox');
   });
 });
