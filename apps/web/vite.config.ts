@@ -57,6 +57,8 @@ export default defineConfig({
     outDir: 'dist',
     emptyOutDir: true,
     sourcemap: true,
+    // Lists each chunk's imports, so the bundle-size check can add up what a route loads first.
+    manifest: true,
     rolldownOptions: {
       output: { codeSplitting: { groups: chunkGroups }, strictExecutionOrder: true },
     },
