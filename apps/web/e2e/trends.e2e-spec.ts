@@ -75,9 +75,11 @@ describe('trends (browser)', () => {
     const xbarFigure = page.getByRole('figure', { name: 'X-bar chart' });
     await xbarFigure.getByText(`UCL ${shown(trend.subgroups.xbar!)[2]}`).waitFor();
     await xbarFigure.getByText(`LCL ${shown(trend.subgroups.xbar!)[0]}`).waitFor();
-    // Fewer than 30 heights: the capability card says so.
-    expect(trend.capability!.count).toBeLessThan(30);
-    await page.getByText(/common practice wants about 30 or more/).waitFor();
+    // Fewer than 30 heights (the demo alone has 26; other browser tests may add RB-40 parts to the
+    // shared server): the capability card says so, and only then.
+    const warning = page.getByText(/common practice wants about 30 or more/);
+    if (trend.capability!.count < 30) await warning.waitFor();
+    else expect(await warning.count()).toBe(0);
     await screenshot(page, 'trends-rb40');
 
     // Exports: the data as CSV (one row a point) and the X-bar chart as SVG.
