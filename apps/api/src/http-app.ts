@@ -8,6 +8,9 @@ import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { cleanupOpenApiDoc } from 'nestjs-zod';
 import passport from 'passport';
+import type { NextFunction, Request, Response } from 'express';
+import { isDatabaseUnavailable } from './common/errors/database-errors';
+import { DatabaseUnavailableException } from './common/errors/domain.exception';
 import { randomBytes } from 'node:crypto';
 import { AppModule } from './app.module';
 import { AppConfig } from './config/app-config.service';
@@ -68,6 +71,13 @@ export async function createHttpApp(): Promise<INestApplication> {
   );
   app.use(passport.initialize());
   app.use(passport.session());
+  // Loading the session runs before Nest's exception filter: a database outage here would
+  // otherwise fall through to a 404. Answer as the filter does for every other route.
+  app.use((error: unknown, _req: Request, res: Response, next: NextFunction) => {
+    if (!isDatabaseUnavailable(error)) return next(error);
+    const unavailable = new DatabaseUnavailableException();
+    res.status(unavailable.status).json({ code: unavailable.code, message: unavailable.message });
+  });
   app.enableShutdownHooks();
 
   const openApi = new DocumentBuilder()
