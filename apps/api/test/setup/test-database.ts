@@ -36,7 +36,20 @@ export async function createTestDatabase(): Promise<TestDatabase> {
   return {
     name,
     url: withDatabase(TEMPLATE_URL, name),
-    drop: () =>
-      onServer((client) => client.query(`drop database if exists "${name}" with (force)`)).then(() => undefined),
+    drop: () => onServer((client) => dropDatabase(client, name)),
   };
+}
+
+/**
+ * Drops a test database once its app is closed. FORCE ends leftover connections, but PostgreSQL
+ * refuses it to a non-superuser while an autovacuum worker is on that database (the worker has no
+ * role to match); a plain DROP then works, as it stops autovacuum workers itself.
+ */
+async function dropDatabase(client: Client, name: string): Promise<void> {
+  try {
+    await client.query(`drop database if exists "${name}" with (force)`);
+  } catch (error) {
+    if ((error as { code?: unknown }).code !== '42501') throw error;
+    await client.query(`drop database if exists "${name}"`);
+  }
 }

@@ -116,5 +116,10 @@ export async function stopServer(server: StartedServer): Promise<void> {
   await new Promise((resolve) => setTimeout(resolve, 500));
   await sinks.get(server.database)?.close();
   sinks.delete(server.database);
-  await onServer(`drop database if exists "${server.database}" with (force)`);
+  // FORCE is refused to a non-superuser while autovacuum works on the database; a plain DROP
+  // stops autovacuum itself, and the server is gone by now.
+  await onServer(`drop database if exists "${server.database}" with (force)`).catch((error: unknown) => {
+    if ((error as { code?: unknown }).code !== '42501') throw error;
+    return onServer(`drop database if exists "${server.database}"`);
+  });
 }
