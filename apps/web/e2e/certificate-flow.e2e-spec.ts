@@ -2,7 +2,7 @@ import { Client } from 'pg';
 import type { Page } from 'playwright-core';
 import { DEMO_PASSWORD } from './setup/bench';
 import { openBrowser, type OpenBrowser, screenshot, signIn } from './setup/browser';
-import { databaseUrlOf, startServer, stopServer, type StartedServer } from './setup/server';
+import { databaseUrlOf, startOwnServer, type OwnServer } from './setup/server';
 
 // This test sells sets and tampers with a certificate row, so it runs on a server and database
 // of its own rather than the one the other browser tests share.
@@ -18,20 +18,16 @@ async function signOut(page: Page): Promise<void> {
 }
 
 describe('a certificate from set building to verification (browser)', () => {
-  let server: StartedServer;
-  let sharedBaseUrl: string | undefined;
+  let server: OwnServer;
   let browser: OpenBrowser;
 
   beforeAll(async () => {
-    server = await startServer();
-    sharedBaseUrl = process.env.EVENSET_BASE_URL;
-    process.env.EVENSET_BASE_URL = server.baseUrl;
+    server = await startOwnServer();
     browser = await openBrowser({ width: 1440, height: 900 });
   }, 120_000);
   afterAll(async () => {
     await browser.close();
-    process.env.EVENSET_BASE_URL = sharedBaseUrl;
-    await stopServer(server);
+    await server.close();
   });
 
   it('sales builds two sets, issues and e-mails a certificate; the Outbox holds it; the verification page tells genuine from altered', async () => {

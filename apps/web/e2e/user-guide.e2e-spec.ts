@@ -9,7 +9,7 @@ import {
   startBenchRun,
 } from './setup/bench';
 import { GUIDE_IMAGES, openBrowser, type OpenBrowser, screenshot, signIn } from './setup/browser';
-import { startServer, stopServer, type StartedServer } from './setup/server';
+import { startOwnServer, type OwnServer } from './setup/server';
 
 // Walks docs/user-guide.md on the demo data, step by step, and takes the guide's pictures
 // (docs/images/guide-*.png) from the real app. Its own server: the walk sells stock and raises
@@ -41,20 +41,16 @@ async function as(page: Page, email: string): Promise<void> {
 const picture = (page: Page, name: string) => screenshot(page, `guide-${name}`, GUIDE_IMAGES);
 
 describe('the user guide, walked on the demo data (browser)', () => {
-  let server: StartedServer;
-  let sharedBaseUrl: string | undefined;
+  let server: OwnServer;
   let browser: OpenBrowser;
 
   beforeAll(async () => {
-    server = await startServer();
-    sharedBaseUrl = process.env.EVENSET_BASE_URL;
-    process.env.EVENSET_BASE_URL = server.baseUrl;
+    server = await startOwnServer();
     browser = await openBrowser({ width: 1280, height: 800 });
   }, 120_000);
   afterAll(async () => {
     await browser.close();
-    process.env.EVENSET_BASE_URL = sharedBaseUrl;
-    await stopServer(server);
+    await server.close();
   });
 
   it('1. signs in', async () => {

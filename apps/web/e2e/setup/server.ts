@@ -123,3 +123,25 @@ export async function stopServer(server: StartedServer): Promise<void> {
     return onServer(`drop database if exists "${server.database}"`);
   });
 }
+
+export interface OwnServer extends StartedServer {
+  /** Stops the server, drops its database and points the browser helpers back at the shared one. */
+  close(): Promise<void>;
+}
+
+/**
+ * A server and database of the calling test file's own, for tests that change what others would
+ * see (selling stock, tampering with rows); the browser helpers use it until `close`.
+ */
+export async function startOwnServer(): Promise<OwnServer> {
+  const server = await startServer();
+  const shared = process.env.EVENSET_BASE_URL;
+  process.env.EVENSET_BASE_URL = server.baseUrl;
+  return {
+    ...server,
+    close: async () => {
+      process.env.EVENSET_BASE_URL = shared;
+      await stopServer(server);
+    },
+  };
+}
