@@ -1,7 +1,7 @@
 import type { Trend, TrendPartNumber } from '@evenset/contracts';
 import { capability, individuals, runRules, xbarR } from '@evenset/metrology';
 import { ensureUser } from '../src/database/factories/user.factory';
-import { type Bench, givenBench, givenLot, post, topReadings } from './setup/bench';
+import { type Bench, givenBench, givenLot, partRows, post, startRun, topReadings } from './setup/bench';
 import { givenCustomer, givenReleasedParts, givenSoldSets } from './setup/sets';
 import { type Browser, signIn, signInAs, startTestApp, TEST_PASSWORD, type TestApp } from './setup/test-app';
 
@@ -257,5 +257,28 @@ describe('trends of part height', () => {
     expect((await trend({}, admin)).points).toHaveLength(13);
     expect((await trend({}, bench.inspector)).points).toHaveLength(13);
     await sales.agent.get('/api/trends/RB-40').expect(403);
+  });
+
+  it('charts the current height: a correction replaces the inspection it supersedes', async () => {
+    const lot = await givenLot(bench, 'L-TR-4', ['D1', 'D2']);
+    const [d1, d2] = (await partRows(bench, lot.id)).items;
+    const run = await startRun(bench, lot.id);
+    const inspect = (partId: string, reading: number, correcting?: { supersedesId: string; reason: string }) =>
+      post(bench.inspector, `/api/runs/${run.id}/inspections`, {
+        partId,
+        unit: 'in',
+        readings: topReadings([reading]),
+        ...correcting,
+      }).expect(201);
+    const first = await inspect(d1!.id, -0.0003);
+    await inspect(d2!.id, -0.0002);
+    await inspect(d1!.id, -0.0001, { supersedesId: first.body.id, reason: 'Read off the chamfer; measured again.' });
+
+    // The trend reads the records in SQL; the lot's part list derives the same rule in the service.
+    const rows = (await partRows(bench, lot.id)).items;
+    const answer = await trend();
+    const charted = new Map(answer.points.map((p) => [p.serial, p.height]));
+    expect(rows.map((r) => [r.serial, charted.get(r.serial)])).toEqual(rows.map((r) => [r.serial, r.height]));
+    expect(answer.points).toHaveLength(15);
   });
 });

@@ -10,10 +10,8 @@ import {
 } from '@evenset/contracts';
 import { capability } from '@evenset/metrology';
 import { NotFoundException } from '../common/errors/domain.exception';
-import { PartStatusService } from '../lots/part-status';
-import { Part } from '../lots/part.entity';
-import { SetMember } from '../sets/set-member.entity';
 import { Spec } from '../specs/spec.entity';
+import { trendRows, type TrendRow } from './trend-rows';
 import { histogram, individualsChart, signalsOf, subgroupChart, type Group } from './trend-charts';
 
 type TrendFilters = z.output<typeof trendQuerySchema>;
@@ -21,21 +19,13 @@ type TrendFilters = z.output<typeof trendQuerySchema>;
 /** Fewer values than this behind Cp/Cpk draw a warning (common practice: about 30). */
 export const FEW_VALUES = 30;
 
-interface Row extends TrendPoint {
-  grindDate: string;
-  setCreatedAt: Date | null;
-}
-
 /**
  * Trends of part height per part number, read from the records: each part's current height (the
  * newest result of its newest inspection no correction superseded), whatever its later status.
  */
 @Injectable()
 export class TrendsService {
-  constructor(
-    private readonly em: EntityManager,
-    private readonly states: PartStatusService,
-  ) {}
+  constructor(private readonly em: EntityManager) {}
 
   /** Part numbers with a released revision, the ones a trend can be drawn against. */
   async partNumbers(): Promise<{ items: TrendPartNumber[] }> {
@@ -50,7 +40,7 @@ export class TrendsService {
     if (!specs.length) throw new NotFoundException(`Part number ${partNumber}`);
     const released = specs.find((s) => s.status === 'released') ?? null;
 
-    const all = await this.rows(partNumber);
+    const all = await trendRows(this.em, partNumber);
     const rows = all.filter((r) => matches(r, filters));
     const points: TrendPoint[] = rows.map(({ grindDate: _g, setCreatedAt: _s, ...point }) => point);
     const heights = points.map((p) => p.height);
@@ -94,51 +84,9 @@ export class TrendsService {
       choices: choicesOf(all),
     };
   }
-
-  /** Every measured part of the part number, in chart order: lots by grind date, then inspection time. */
-  private async rows(partNumber: string): Promise<Row[]> {
-    const parts = await this.em.find(Part, { partNumber }, { populate: ['lot'] });
-    const states = await this.states.states(parts);
-    const members = parts.length
-      ? await this.em.find(
-          SetMember,
-          { part: { $in: parts.map((p) => p.id) }, set: { kind: 'set' } },
-          { populate: ['set'] },
-        )
-      : [];
-    const setOf = new Map(members.map((m) => [m.part.id, m.set]));
-    const rows: Row[] = [];
-    for (const { part, inspection, result } of states) {
-      if (!inspection || !result) continue;
-      const set = setOf.get(part.id) ?? null;
-      const master = inspection.run.master;
-      rows.push({
-        partId: part.id,
-        serial: part.serial,
-        lotId: part.lot.id,
-        lotNumber: part.lot.lotNumber,
-        setNumber: set?.setNumber ?? null,
-        inspectorId: inspection.inspectorId,
-        inspectorName: inspection.inspectorName,
-        masterId: master.id,
-        masterCode: master.code,
-        inspectedAt: inspection.createdAt.toISOString(),
-        height: result.computed.height,
-        grindDate: part.lot.grindDate,
-        setCreatedAt: set?.createdAt ?? null,
-      });
-    }
-    return rows.sort(
-      (a, b) =>
-        a.grindDate.localeCompare(b.grindDate) ||
-        a.lotNumber.localeCompare(b.lotNumber) ||
-        a.inspectedAt.localeCompare(b.inspectedAt) ||
-        a.serial.localeCompare(b.serial),
-    );
-  }
 }
 
-function matches(row: Row, f: TrendFilters): boolean {
+function matches(row: TrendRow, f: TrendFilters): boolean {
   const day = row.inspectedAt.slice(0, 10);
   if (f.from && day < f.from) return false;
   if (f.to && day > f.to) return false;
@@ -152,12 +100,12 @@ function matches(row: Row, f: TrendFilters): boolean {
 }
 
 /** Subgroups by lot (in chart order) or by sold set (in order of sale); parts in no set are not grouped. */
-function groupsOf(rows: readonly Row[], basis: 'lot' | 'set'): Group[] {
+function groupsOf(rows: readonly TrendRow[], basis: 'lot' | 'set'): Group[] {
   const groups = new Map<string, Group & { order: number }>();
   for (const row of rows) {
     const label = basis === 'lot' ? row.lotNumber : row.setNumber;
     if (label === null) continue;
-    const order = basis === 'lot' ? groups.size : (row.setCreatedAt?.getTime() ?? 0);
+    const order = basis === 'lot' ? groups.size : (row.setCreatedAt ?? 0);
     const group = groups.get(label) ?? { label, serials: [], heights: [], order };
     group.serials.push(row.serial);
     group.heights.push(row.height);
@@ -202,7 +150,7 @@ function capabilityOf(
   };
 }
 
-function choicesOf(rows: readonly Row[]): Trend['choices'] {
+function choicesOf(rows: readonly TrendRow[]): Trend['choices'] {
   const lots = new Map<string, string>();
   const inspectors = new Map<string, { id: string | null; name: string }>();
   const masters = new Map<string, string>();

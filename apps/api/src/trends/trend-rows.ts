@@ -1,0 +1,61 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import type { TrendPoint } from '@evenset/contracts';
+
+/** A charted part with what the chart orders and groups it by. */
+export interface TrendRow extends TrendPoint {
+  grindDate: string;
+  /** When the part's sold set was made (ms since the epoch), for subgroups in order of sale. */
+  setCreatedAt: number | null;
+}
+
+/**
+ * Each measured part of a part number with its current height: the newest result of its newest
+ * inspection that no correction superseded (the rule of PartStatusService, here in one SQL pass so
+ * that years of lots read in one query rather than as ORM objects). The height is the computed,
+ * unrounded one the part page shows. Rows come back in chart order: lots by grind date, then
+ * inspection time.
+ */
+export const TREND_ROWS_SQL = `
+  select p.id as "partId", p.serial, l.id as "lotId", l.lot_number as "lotNumber", l.grind_date::text as "grindDate",
+         cur.inspector_id as "inspectorId", cur.inspector_name as "inspectorName",
+         extract(epoch from cur.created_at) * 1000 as "inspectedAt",
+         m.id as "masterId", m.code as "masterCode", cur.height,
+         s.set_number as "setNumber", extract(epoch from s.created_at) * 1000 as "setCreatedAt"
+    from (
+      select distinct on (c.part_id) c.part_id, c.created_at, c.inspector_id, c.inspector_name, c.run_id,
+             (x.computed ->> 'height')::float8 as height
+        from part p
+        join inspection c on c.part_id = p.id
+        join inspection_result x on x.inspection_id = c.id
+       where p.part_number = ? and not exists (select 1 from inspection n where n.supersedes_id = c.id)
+       order by c.part_id, c.created_at desc, c.id desc, x.created_at desc, x.id desc
+    ) cur
+    join part p on p.id = cur.part_id
+    join lot l on l.id = p.lot_id
+    join bench_run b on b.id = cur.run_id
+    join master_gauge m on m.id = b.master_id
+    left join set_member sm on sm.part_id = p.id
+    left join matched_set s on s.id = sm.set_id and s.kind = 'set'`;
+
+interface RawRow extends Omit<TrendRow, 'inspectedAt' | 'setCreatedAt'> {
+  inspectedAt: string | number;
+  setCreatedAt: string | number | null;
+}
+
+export async function trendRows(em: EntityManager, partNumber: string): Promise<TrendRow[]> {
+  const raw = await em.getConnection().execute<RawRow[]>(TREND_ROWS_SQL, [partNumber]);
+  const rows = raw.map((r) => ({
+    ...r,
+    height: Number(r.height),
+    inspectedAt: new Date(Number(r.inspectedAt)).toISOString(),
+    setCreatedAt: r.setCreatedAt === null ? null : Number(r.setCreatedAt),
+  }));
+  // Sorted here, with the same comparisons the page's other lists use (SQL collations differ).
+  return rows.sort(
+    (a, b) =>
+      a.grindDate.localeCompare(b.grindDate) ||
+      a.lotNumber.localeCompare(b.lotNumber) ||
+      a.inspectedAt.localeCompare(b.inspectedAt) ||
+      a.serial.localeCompare(b.serial),
+  );
+}
