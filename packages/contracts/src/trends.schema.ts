@@ -49,17 +49,16 @@ export const trendPartNumberSchema = z.object({
 });
 export type TrendPartNumber = z.infer<typeof trendPartNumberSchema>;
 
-/** One part's current height: the newest result of its current (not superseded) inspection. */
+/**
+ * One part's current height: the newest result of its current (not superseded) inspection. Ids are left out on purpose: a part number can hold 20,000 points, and the
+ * filters' ids travel once in `choices`.
+ */
 export const trendPointSchema = z.object({
-  partId: z.string(),
   serial: z.string(),
-  lotId: z.string(),
   lotNumber: z.string(),
   /** The sold set holding the part, if any. */
   setNumber: z.string().nullable(),
-  inspectorId: z.string().nullable(),
   inspectorName: z.string(),
-  masterId: z.string(),
   masterCode: z.string(),
   inspectedAt: z.string(),
   /** mm */

@@ -1,8 +1,11 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { TrendPoint } from '@evenset/contracts';
 
-/** A charted part with what the chart orders and groups it by. */
+/** A charted part with what the filters, the order and the subgroups go by. */
 export interface TrendRow extends TrendPoint {
+  lotId: string;
+  inspectorId: string | null;
+  masterId: string;
   grindDate: string;
   /** When the part's sold set was made (ms since the epoch), for subgroups in order of sale. */
   setCreatedAt: number | null;
@@ -16,7 +19,7 @@ export interface TrendRow extends TrendPoint {
  * inspection time.
  */
 export const TREND_ROWS_SQL = `
-  select p.id as "partId", p.serial, l.id as "lotId", l.lot_number as "lotNumber", l.grind_date::text as "grindDate",
+  select p.serial, l.id as "lotId", l.lot_number as "lotNumber", l.grind_date::text as "grindDate",
          cur.inspector_id as "inspectorId", cur.inspector_name as "inspectorName",
          extract(epoch from cur.created_at) * 1000 as "inspectedAt",
          m.id as "masterId", m.code as "masterCode", cur.height,
@@ -42,20 +45,22 @@ interface RawRow extends Omit<TrendRow, 'inspectedAt' | 'setCreatedAt'> {
   setCreatedAt: string | number | null;
 }
 
+/** Compares like `localeCompare`, without building a collator per call (20,000 rows sort here). */
+const { compare } = new Intl.Collator();
+
 export async function trendRows(em: EntityManager, partNumber: string): Promise<TrendRow[]> {
-  const raw = await em.getConnection().execute<RawRow[]>(TREND_ROWS_SQL, [partNumber]);
-  const rows = raw.map((r) => ({
-    ...r,
-    height: Number(r.height),
-    inspectedAt: new Date(Number(r.inspectedAt)).toISOString(),
-    setCreatedAt: r.setCreatedAt === null ? null : Number(r.setCreatedAt),
-  }));
-  // Sorted here, with the same comparisons the page's other lists use (SQL collations differ).
-  return rows.sort(
+  const rows = await em.getConnection().execute<RawRow[]>(TREND_ROWS_SQL, [partNumber]);
+  for (const row of rows) {
+    row.height = Number(row.height);
+    row.inspectedAt = new Date(Number(row.inspectedAt)).toISOString();
+    if (row.setCreatedAt !== null) row.setCreatedAt = Number(row.setCreatedAt);
+  }
+  // Sorted here, with the comparisons the other lists use (SQL collations differ from them).
+  return (rows as TrendRow[]).sort(
     (a, b) =>
-      a.grindDate.localeCompare(b.grindDate) ||
-      a.lotNumber.localeCompare(b.lotNumber) ||
-      a.inspectedAt.localeCompare(b.inspectedAt) ||
-      a.serial.localeCompare(b.serial),
+      compare(a.grindDate, b.grindDate) ||
+      compare(a.lotNumber, b.lotNumber) ||
+      compare(a.inspectedAt, b.inspectedAt) ||
+      compare(a.serial, b.serial),
   );
 }

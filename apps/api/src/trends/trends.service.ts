@@ -42,7 +42,15 @@ export class TrendsService {
 
     const all = await trendRows(this.em, partNumber);
     const rows = all.filter((r) => matches(r, filters));
-    const points: TrendPoint[] = rows.map(({ grindDate: _g, setCreatedAt: _s, ...point }) => point);
+    const points: TrendPoint[] = rows.map((r) => ({
+      serial: r.serial,
+      lotNumber: r.lotNumber,
+      setNumber: r.setNumber,
+      inspectorName: r.inspectorName,
+      masterCode: r.masterCode,
+      inspectedAt: r.inspectedAt,
+      height: r.height,
+    }));
     const heights = points.map((p) => p.height);
     const serials = points.map((p) => p.serial);
 

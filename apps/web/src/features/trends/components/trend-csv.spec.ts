@@ -14,14 +14,10 @@ describe('trend CSV', () => {
     const csv = trendCsv(
       [
         {
-          partId: 'p1',
           serial: 'RB40-0401',
-          lotId: 'l1',
           lotNumber: 'L-2026-041',
           setNumber: null,
-          inspectorId: null,
           inspectorName: 'Lisle, Rowan',
-          masterId: 'm1',
           masterCode: 'MG-1.500-A',
           inspectedAt: '2026-11-20T10:00:00.000Z',
           height: 38.1,
