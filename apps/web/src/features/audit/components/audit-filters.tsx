@@ -1,8 +1,9 @@
 import type { AuditFacets } from '@evenset/contracts';
 import Button from '@mui/material/Button';
-import MenuItem from '@mui/material/MenuItem';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
+import { ChoiceFilter } from '../../../components/filters/choice-filter';
+import { DateRangeFields } from '../../../components/filters/date-range-fields';
 
 /** The filters besides the grid's own search text; empty strings mean "any". */
 export interface AuditFilterValues {
@@ -31,77 +32,36 @@ interface AuditFiltersProps {
   errors: Readonly<Record<string, string>>;
 }
 
-const selectSx = { minWidth: 200 } as const;
-
 export function AuditFilters({ facets, value, onChange, errors }: AuditFiltersProps) {
   const set = (key: keyof AuditFilterValues, v: string) => onChange({ ...value, [key]: v });
-  const any = (
-    <MenuItem value="">
-      <em>Any</em>
-    </MenuItem>
-  );
+  const plain = (values: readonly string[] = []) => values.map((v) => ({ value: v, label: v }));
   return (
     <Stack direction="row" spacing={2} useFlexGap sx={{ flexWrap: 'wrap', alignItems: 'flex-start' }}>
-      <TextField
-        select
+      <ChoiceFilter
         label="Action"
         value={value.action}
-        onChange={(e) => set('action', e.target.value)}
-        sx={selectSx}
-      >
-        {any}
-        {(facets?.actions ?? []).map((action) => (
-          <MenuItem key={action} value={action}>
-            {action}
-          </MenuItem>
-        ))}
-      </TextField>
-      <TextField
-        select
+        onChange={(v) => set('action', v)}
+        choices={plain(facets?.actions)}
+        anyLabel="Any action"
+        minWidth={200}
+      />
+      <ChoiceFilter
         label="Who"
         value={value.actorId}
-        onChange={(e) => set('actorId', e.target.value)}
-        sx={selectSx}
-      >
-        {any}
-        {(facets?.actors ?? []).map((actor) => (
-          <MenuItem key={actor.id} value={actor.id}>
-            {actor.name}
-          </MenuItem>
-        ))}
-      </TextField>
-      <TextField
-        select
+        onChange={(v) => set('actorId', v)}
+        choices={(facets?.actors ?? []).map((a) => ({ value: a.id, label: a.name }))}
+        anyLabel="Anyone"
+        minWidth={200}
+      />
+      <ChoiceFilter
         label="Record type"
         value={value.subjectType}
-        onChange={(e) => set('subjectType', e.target.value)}
-        sx={selectSx}
-      >
-        {any}
-        {(facets?.subjectTypes ?? []).map((type) => (
-          <MenuItem key={type} value={type}>
-            {type}
-          </MenuItem>
-        ))}
-      </TextField>
-      <TextField
-        type="date"
-        label="From"
-        value={value.from}
-        onChange={(e) => set('from', e.target.value)}
-        error={Boolean(errors.from)}
-        helperText={errors.from}
-        slotProps={{ inputLabel: { shrink: true } }}
+        onChange={(v) => set('subjectType', v)}
+        choices={plain(facets?.subjectTypes)}
+        anyLabel="Any record"
+        minWidth={200}
       />
-      <TextField
-        type="date"
-        label="To"
-        value={value.to}
-        onChange={(e) => set('to', e.target.value)}
-        error={Boolean(errors.to)}
-        helperText={errors.to}
-        slotProps={{ inputLabel: { shrink: true } }}
-      />
+      <DateRangeFields value={value} onChange={(range) => onChange({ ...value, ...range })} errors={errors} />
       {value.subjectId ? (
         <TextField
           label="Record id"

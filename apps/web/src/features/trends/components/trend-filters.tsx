@@ -5,6 +5,8 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
+import { ChoiceFilter } from '../../../components/filters/choice-filter';
+import { DateRangeFields } from '../../../components/filters/date-range-fields';
 import { NO_FILTERS, type TrendFilters as Filters } from '../api/get-trends';
 
 interface TrendFiltersProps {
@@ -48,23 +50,11 @@ export function TrendFilters({
             </MenuItem>
           ))}
         </TextField>
-        <TextField
-          type="date"
-          label="Inspected from"
-          value={filters.from}
-          onChange={(e) => set('from', e.target.value)}
-          error={Boolean(errors.from)}
-          helperText={errors.from}
-          slotProps={{ inputLabel: { shrink: true } }}
-        />
-        <TextField
-          type="date"
-          label="Inspected to"
-          value={filters.to}
-          onChange={(e) => set('to', e.target.value)}
-          error={Boolean(errors.to)}
-          helperText={errors.to}
-          slotProps={{ inputLabel: { shrink: true } }}
+        <DateRangeFields
+          value={filters}
+          onChange={(range) => onChange({ ...filters, ...range })}
+          errors={errors}
+          labels={{ from: 'Inspected from', to: 'Inspected to' }}
         />
         <TextField
           select
@@ -93,36 +83,20 @@ export function TrendFilters({
             </MenuItem>
           ))}
         </TextField>
-        <TextField
-          select
+        <ChoiceFilter
           label="Inspector"
           value={filters.inspector}
-          onChange={(e) => set('inspector', e.target.value)}
-          sx={fieldSx}
-          slotProps={{ select: { displayEmpty: true }, inputLabel: { shrink: true } }}
-        >
-          <MenuItem value="">Any inspector</MenuItem>
-          {(choices?.inspectors ?? []).map((who) => (
-            <MenuItem key={who.id ?? who.name} value={who.id ?? who.name}>
-              {who.name}
-            </MenuItem>
-          ))}
-        </TextField>
-        <TextField
-          select
+          onChange={(v) => set('inspector', v)}
+          choices={(choices?.inspectors ?? []).map((who) => ({ value: who.id ?? who.name, label: who.name }))}
+          anyLabel="Any inspector"
+        />
+        <ChoiceFilter
           label="Master gauge"
           value={filters.masterId}
-          onChange={(e) => set('masterId', e.target.value)}
-          sx={fieldSx}
-          slotProps={{ select: { displayEmpty: true }, inputLabel: { shrink: true } }}
-        >
-          <MenuItem value="">Any master</MenuItem>
-          {(choices?.masters ?? []).map((m) => (
-            <MenuItem key={m.id} value={m.id}>
-              {m.code}
-            </MenuItem>
-          ))}
-        </TextField>
+          onChange={(v) => set('masterId', v)}
+          choices={(choices?.masters ?? []).map((m) => ({ value: m.id, label: m.code }))}
+          anyLabel="Any master"
+        />
       </Stack>
       <Stack direction="row" spacing={2} sx={{ alignItems: 'center' }}>
         <ToggleButtonGroup
