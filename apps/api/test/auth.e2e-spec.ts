@@ -22,6 +22,15 @@ describe('sign-in and sessions', () => {
     expect(res.body).toMatchObject({ code: 'CSRF_INVALID' });
   });
 
+  it('refuses a CSRF token that belongs to another session', async () => {
+    const [mine, theirs] = [await givenUser(t.app, ['inspector']), await givenUser(t.app, ['inspector'])];
+    const victim = await signIn(t.app, mine.email);
+    const attacker = await signIn(t.app, theirs.email);
+    const res = await victim.agent.post('/api/auth/logout').set(CSRF_HEADER, attacker.csrf);
+    expect([res.status, res.body.code]).toEqual([403, 'CSRF_INVALID']);
+    await victim.agent.get('/api/auth/me').expect(200);
+  });
+
   it('answers a wrong password with a plain message and no session', async () => {
     const user = await givenUser(t.app, ['inspector']);
     const browser = await anonymousBrowser(t.app);
@@ -64,9 +73,12 @@ describe('sign-in and sessions', () => {
       roles: ['engineer', 'inspector'],
     });
     const cookieAfter = sessionCookie(login.headers['set-cookie']);
-    // Session fixation: the id handed out before sign-in is not the one used after.
+    // Session fixation: the id handed out before sign-in is not the one used after, and the old
+    // one is not signed in (someone who planted it gains nothing).
+    expect(cookieBefore).toBeDefined();
     expect(cookieAfter).toBeDefined();
-    expect(cookieAfter).not.toEqual(cookieBefore);
+    expect(cookieValue(cookieAfter)).not.toEqual(cookieValue(cookieBefore));
+    await request(t.app.getHttpServer()).get('/api/auth/me').set('Cookie', cookieValue(cookieBefore)).expect(401);
     const me = await browser.agent.get('/api/auth/me').expect(200);
     expect(me.body.user.id).toBe(user.id);
     // The pre-sign-in token died with the old session.
@@ -142,6 +154,9 @@ describe('sign-in and sessions', () => {
     expect(res.status).toBe(401);
   });
 });
+
+/** `name=value` of a Set-Cookie header, as a browser sends it back. */
+const cookieValue = (setCookie: string | undefined) => setCookie?.split(';')[0] ?? '';
 
 function sessionCookie(header: string | string[] | undefined): string | undefined {
   const cookies = Array.isArray(header) ? header : header ? [header] : [];

@@ -1,5 +1,7 @@
 import { EntityManager } from '@mikro-orm/postgresql';
+import { createHttpApp } from '../src/http-app';
 import { User } from '../src/users/user.entity';
+import { createTestDatabase } from './setup/test-database';
 import { signIn, startTestApp, TestApp } from './setup/test-app';
 
 describe('first admin from the environment', () => {
@@ -21,5 +23,18 @@ describe('first admin from the environment', () => {
     const browser = await signIn(t.app, 'owner@shop.example', 'first-admin-password');
     const me = await browser.agent.get('/api/auth/me').expect(200);
     expect(me.body.user.roles).toEqual(['admin']);
+  });
+
+  it('refuses to start with a common password for the first admin, creating no one', async () => {
+    const db = await createTestDatabase();
+    Object.assign(process.env, { DATABASE_URL: db.url, EVENSET_ADMIN_PASSWORD: 'Administrator' });
+    const app = await createHttpApp();
+    try {
+      await expect(app.init()).rejects.toThrow('This password is on a list of common passwords; choose another.');
+      expect(await app.get(EntityManager).fork().count(User, {})).toBe(0);
+    } finally {
+      await app.close();
+      await db.drop();
+    }
   });
 });

@@ -78,6 +78,12 @@ describe('password reset by e-mail', () => {
     const tooShort = await confirm(token, 'short');
     expect(tooShort.status).toBe(400);
     expect(tooShort.body.details).toEqual([{ path: 'password', message: 'Use at least 10 characters.' }]);
+    // A common password is refused too, and the link stays unspent (it works just below).
+    const common = await confirm(token, 'Basketball');
+    expect([common.status, common.body.details]).toEqual([
+      400,
+      [{ path: 'password', message: 'This password is on a list of common passwords; choose another.' }],
+    ]);
 
     await confirm(token, NEW_PASSWORD).then((res) => expect(res.status).toBe(204));
     await signIn(t.app, user.email, NEW_PASSWORD);

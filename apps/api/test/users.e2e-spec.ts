@@ -50,6 +50,26 @@ describe('people (admin)', () => {
     expect(list.body.total).toBe(0);
   });
 
+  it('refuses a common password, whatever its case, when creating a person or resetting a password', async () => {
+    const refusal = {
+      code: 'VALIDATION_FAILED',
+      details: [{ path: 'password', message: 'This password is on a list of common passwords; choose another.' }],
+    };
+    const created = await post('/api/users', {
+      email: 'weak@test.example',
+      displayName: 'Weak Password',
+      roles: ['sales'],
+      password: 'PassWord123',
+    });
+    expect([created.status, created.body]).toEqual([400, expect.objectContaining(refusal)]);
+    expect((await admin.agent.get('/api/users').query({ q: 'weak@test.example' }).expect(200)).body.total).toBe(0);
+
+    const person = await givenUser(t.app, ['inspector']);
+    const reset = await post(`/api/users/${person.id}/password`, { password: 'QWERTYUIOP' });
+    expect([reset.status, reset.body]).toEqual([400, expect.objectContaining(refusal)]);
+    await signIn(t.app, person.email);
+  });
+
   it('refuses a second person with the same e-mail, naming the field', async () => {
     await post('/api/users', {
       email: 'twin@test.example',

@@ -6,7 +6,7 @@ import { AuditService } from '../audit/audit.service';
 import { AppConfig } from '../config/app-config.service';
 import { MailService } from '../mail/mail.service';
 import { User } from '../users/user.entity';
-import { hashPassword } from './password';
+import { hashNewPassword } from './password';
 import { ResetLinkRefusedException } from './password-reset.exception';
 import { PasswordResetToken } from './password-reset-token.entity';
 
@@ -85,7 +85,7 @@ export class PasswordResetService {
   }
 
   async confirm(input: PasswordResetConfirmInput): Promise<void> {
-    const passwordHash = await hashPassword(input.password);
+    const passwordHash = await hashNewPassword(input.password);
     const user = await this.em.transactional(async (tx) => {
       const row = await tx.findOne(PasswordResetToken, { tokenHash: tokenHash(input.token) }, { populate: ['user'] });
       if (!row || !row.user.active) throw new ResetLinkRefusedException('unknown');

@@ -1,4 +1,5 @@
-import { hashPassword, UNKNOWN_USER_HASH, verifyPassword } from './password';
+import { COMMON_PASSWORD_MESSAGE, isCommonPassword } from './common-passwords';
+import { hashNewPassword, hashPassword, UNKNOWN_USER_HASH, verifyPassword } from './password';
 
 describe('password hashing (scrypt)', () => {
   it('verifies the right password and refuses a wrong one', async () => {
@@ -15,5 +16,29 @@ describe('password hashing (scrypt)', () => {
   it('never matches the stand-in hash used for unknown accounts, nor a malformed one', async () => {
     await expect(verifyPassword('', UNKNOWN_USER_HASH)).resolves.toBe(false);
     await expect(verifyPassword('x', 'plain-text')).resolves.toBe(false);
+  });
+});
+
+describe('common passwords (@zxcvbn-ts/language-common)', () => {
+  it('finds a listed password whatever its case, and not the passwords of the demo and the tests', () => {
+    expect(['password123', 'PASSWORD123', 'Basketball', 'qwertyuiop'].map(isCommonPassword)).toEqual([
+      true,
+      true,
+      true,
+      true,
+    ]);
+    expect(['evenset-demo-1', 'correct-horse-battery', 'granite-plate-42'].map(isCommonPassword)).toEqual([
+      false,
+      false,
+      false,
+    ]);
+  });
+
+  it('refuses a common new password before hashing it, naming the field', async () => {
+    await expect(hashNewPassword('Password123')).rejects.toMatchObject({
+      status: 400,
+      details: [{ path: 'password', message: COMMON_PASSWORD_MESSAGE }],
+    });
+    await expect(hashNewPassword('granite-plate-42')).resolves.toMatch(/^scrypt\$/);
   });
 });

@@ -1,4 +1,5 @@
 import { randomBytes, scrypt, timingSafeEqual } from 'node:crypto';
+import { refuseCommonPassword } from './common-passwords';
 
 // scrypt cost (N = 2^15, r = 8, p = 1): OWASP's minimum recommendation for scrypt.
 const N = 2 ** 15;
@@ -20,6 +21,12 @@ export async function hashPassword(password: string): Promise<string> {
   const salt = randomBytes(16);
   const key = await derive(password, salt, N, R, P);
   return ['scrypt', N, R, P, salt.toString('base64'), key.toString('base64')].join('$');
+}
+
+/** A password someone chooses now: refused when it is a common one, hashed otherwise. */
+export async function hashNewPassword(password: string): Promise<string> {
+  refuseCommonPassword(password);
+  return hashPassword(password);
 }
 
 export async function verifyPassword(password: string, stored: string): Promise<boolean> {

@@ -10,7 +10,7 @@ import type {
 } from '@evenset/contracts';
 import { AuditService } from '../audit/audit.service';
 import { NotFoundException } from '../common/errors/domain.exception';
-import { hashPassword } from '../auth/password';
+import { hashNewPassword } from '../auth/password';
 import { listOptions, searchAny } from '../common/list-query';
 import { SelfLockoutException, UserEmailTakenException } from './users.exception';
 import { User } from './user.entity';
@@ -36,7 +36,7 @@ export class UsersService {
       email: input.email,
       displayName: input.displayName,
       roles: input.roles,
-      passwordHash: await hashPassword(input.password),
+      passwordHash: await hashNewPassword(input.password),
       active: true,
       displayUnit: 'in',
       createdAt: new Date(),
@@ -96,7 +96,7 @@ export class UsersService {
 
   async resetPassword(actor: SessionUser, id: string, password: string): Promise<void> {
     const user = await this.get(id);
-    user.passwordHash = await hashPassword(password);
+    user.passwordHash = await hashNewPassword(password);
     this.audit.record(actor, {
       action: 'user.password-reset',
       subjectType: 'user',

@@ -1,4 +1,4 @@
-import type { INestApplication } from '@nestjs/common';
+import type { INestApplication, Type } from '@nestjs/common';
 import { RequestMethod } from '@nestjs/common';
 import { METHOD_METADATA, PATH_METADATA } from '@nestjs/common/constants';
 import { MetadataScanner, ModulesContainer, Reflector } from '@nestjs/core';
@@ -11,6 +11,9 @@ export interface RouteInfo {
   isPublic: boolean;
   roles: Role[] | undefined;
   handler: string;
+  /** The controller class and its method name, to read the handler's argument metadata. */
+  controller: Type<unknown>;
+  methodName: string;
 }
 
 const joinPath = (...parts: string[]) =>
@@ -41,6 +44,8 @@ export function listRoutes(app: INestApplication): RouteInfo[] {
         isPublic: reflector.getAllAndOverride<boolean>(PUBLIC_KEY, [handler as never, metatype]) ?? false,
         roles: reflector.getAllAndOverride<Role[] | undefined>(ROLES_KEY, [handler as never, metatype]),
         handler: `${metatype.name}.${name}`,
+        controller: metatype as Type<unknown>,
+        methodName: name,
       });
     }
   }
