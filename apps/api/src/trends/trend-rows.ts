@@ -19,25 +19,24 @@ export interface TrendRow extends TrendPoint {
  * inspection time.
  */
 export const TREND_ROWS_SQL = `
-  select p.serial, l.id as "lotId", l.lot_number as "lotNumber", l.grind_date::text as "grindDate",
+  select cur.serial, l.id as "lotId", l.lot_number as "lotNumber", l.grind_date::text as "grindDate",
          cur.inspector_id as "inspectorId", cur.inspector_name as "inspectorName",
          extract(epoch from cur.created_at) * 1000 as "inspectedAt",
          m.id as "masterId", m.code as "masterCode", cur.height,
          s.set_number as "setNumber", extract(epoch from s.created_at) * 1000 as "setCreatedAt"
     from (
-      select distinct on (c.part_id) c.part_id, c.created_at, c.inspector_id, c.inspector_name, c.run_id,
-             (x.computed ->> 'height')::float8 as height
+      select distinct on (c.part_id) c.part_id, p.serial, p.lot_id, c.created_at, c.inspector_id, c.inspector_name,
+             c.run_id, (x.computed ->> 'height')::float8 as height
         from part p
         join inspection c on c.part_id = p.id
         join inspection_result x on x.inspection_id = c.id
        where p.part_number = ? and not exists (select 1 from inspection n where n.supersedes_id = c.id)
        order by c.part_id, c.created_at desc, c.id desc, x.created_at desc, x.id desc
     ) cur
-    join part p on p.id = cur.part_id
-    join lot l on l.id = p.lot_id
+    join lot l on l.id = cur.lot_id
     join bench_run b on b.id = cur.run_id
     join master_gauge m on m.id = b.master_id
-    left join set_member sm on sm.part_id = p.id
+    left join set_member sm on sm.part_id = cur.part_id
     left join matched_set s on s.id = sm.set_id and s.kind = 'set'`;
 
 interface RawRow extends Omit<TrendRow, 'inspectedAt' | 'setCreatedAt'> {
