@@ -48,15 +48,17 @@ export function SignalMark({ cx, cy, size = 7 }: { cx: number; cy: number; size?
   );
 }
 
-function renderDot(props: DotItemDotProps) {
-  const { cx, cy, index } = props;
-  const payload = props.payload as { signal?: boolean } | undefined;
-  if (typeof cx !== 'number' || typeof cy !== 'number') return <g key={index} />;
-  return payload?.signal ? (
-    <SignalMark key={index} cx={cx} cy={cy} />
-  ) : (
-    <circle key={index} cx={cx} cy={cy} r={3.5} fill={slate[800]} />
-  );
+/** Above this many points a dot per point hides the line and slows the page: only signals keep a mark. */
+const DOTS_UP_TO = 400;
+
+function dotRenderer(everyPoint: boolean) {
+  return function renderDot(props: DotItemDotProps) {
+    const { cx, cy, index } = props;
+    const payload = props.payload as { signal?: boolean } | undefined;
+    if (typeof cx !== 'number' || typeof cy !== 'number') return <g key={index} />;
+    if (payload?.signal) return <SignalMark key={index} cx={cx} cy={cy} />;
+    return everyPoint ? <circle key={index} cx={cx} cy={cy} r={3.5} fill={slate[800]} /> : <g key={index} />;
+  };
 }
 
 /** A control chart: the values in order, centre line, control limits and (for heights) the band. */
@@ -67,9 +69,12 @@ export function ControlChart({ title, fileName, quantity, points, limits, band, 
   const data = points.map((p) => ({ label: p.label, value: inUnit(p.value), signal: p.signal }));
   const lines = { upper: inUnit(limits.upper), centre: inUnit(limits.centre), lower: inUnit(limits.lower) };
   const bandIn = band ? { lower: inUnit(band.lower), upper: inUnit(band.upper) } : null;
-  const all = [...data.map((d) => d.value), lines.upper, lines.lower, ...(bandIn ? [bandIn.lower, bandIn.upper] : [])];
-  const low = Math.min(...all);
-  const high = Math.max(...all);
+  // A loop, not Math.min(...values): 20,000 arguments are near the engine's limit.
+  let [low, high] = [
+    Math.min(lines.lower, bandIn?.lower ?? Infinity),
+    Math.max(lines.upper, bandIn?.upper ?? -Infinity),
+  ];
+  for (const { value } of data) [low, high] = [Math.min(low, value), Math.max(high, value)];
   const pad = (high - low || Math.abs(high) || 1) * 0.08;
   const signals = data.filter((d) => d.signal).length;
 
@@ -134,7 +139,7 @@ export function ControlChart({ title, fileName, quantity, points, limits, band, 
             name={quantity}
             stroke={slate[600]}
             strokeWidth={1.5}
-            dot={renderDot}
+            dot={dotRenderer(data.length <= DOTS_UP_TO)}
             isAnimationActive={false}
           />
         </LineChart>
