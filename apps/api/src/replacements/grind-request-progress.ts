@@ -4,7 +4,7 @@ import type { GrindRequestDetail, GrindRequestStatus } from '@evenset/contracts'
 import { PartStatusService } from '../lots/part-status';
 import { GrindRequestStep } from './grind-request-step.entity';
 import type { GrindRequest } from './grind-request.entity';
-import { inWindow } from '../sets/interchange.service';
+import { inWindow } from '../sets/window';
 
 export interface Progress {
   status: GrindRequestStatus;

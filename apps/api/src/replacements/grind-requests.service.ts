@@ -22,7 +22,7 @@ import { GrindRequestProgress, type Progress } from './grind-request-progress';
 import { nextGrindRequestNumber } from './grind-request-number';
 import { GrindRequestStep } from './grind-request-step.entity';
 import { GrindRequest } from './grind-request.entity';
-import { inWindow } from '../sets/interchange.service';
+import { inWindow } from '../sets/window';
 import { GrindRequestStepRefusedException, ReplacementRefusedException } from './replacements.exception';
 import { ReplacementsService } from './replacements.service';
 import { lockRow } from './row-lock';

@@ -1,4 +1,4 @@
-import { inWindow } from '../sets/interchange.service';
+import { inWindow } from '../sets/window';
 import { replacementWindow } from './replacement-window';
 
 // Expected values worked by hand from the brief's definition ("Matching"): a new height h matches

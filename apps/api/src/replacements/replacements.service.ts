@@ -21,7 +21,7 @@ import { SetMember } from '../sets/set-member.entity';
 import { lockFreeStock, nextSetNumber } from '../sets/set-number';
 import { GrindRequestProgress } from './grind-request-progress';
 import { GrindRequest } from './grind-request.entity';
-import { inWindow } from '../sets/interchange.service';
+import { inWindow } from '../sets/window';
 import { lockRow } from './row-lock';
 import {
   NotSoldException,

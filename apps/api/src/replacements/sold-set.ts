@@ -8,7 +8,7 @@ import { MatchedSet } from '../sets/matched-set.entity';
 import { SetMember } from '../sets/set-member.entity';
 import { latestRevision } from '../specs/spec-revision';
 import type { Spec } from '../specs/spec.entity';
-import { inWindow } from '../sets/interchange.service';
+import { inWindow } from '../sets/window';
 import { replacementWindow, type ReplacementWindow } from './replacement-window';
 
 /** A sold set with what a replacement for it must meet. */

@@ -1,30 +1,12 @@
 import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable } from '@nestjs/common';
-import { interchangeWindowDetail, type HeightWindow } from '@evenset/metrology';
+import type { HeightWindow } from '@evenset/metrology';
 import type { Interchange, WindowSummary } from '@evenset/contracts';
 import { NotFoundException } from '../common/errors/domain.exception';
 import { Spec } from '../specs/spec.entity';
 import { MatchedSet } from './matched-set.entity';
 import { SetMember } from './set-member.entity';
-
-/** A set sold earlier, as the window sees it. */
-export interface SoldSet {
-  id: string;
-  setNumber: string;
-  customerName: string;
-  heights: number[];
-}
-
-/** Where new parts of a part number must fall: the window, or why there is none. */
-export interface WindowState {
-  /** Null when nothing is sold yet or when sold sets disagree. */
-  window: HeightWindow | null;
-  /** True when sold sets leave no common height. */
-  conflict: boolean;
-  conflicting: SoldSet[];
-  /** How many sold sets the window comes from. */
-  soldSets: number;
-}
+import { insideWindow, windowOf, type SoldSet, type WindowState } from './window';
 
 /**
  * The interchange window of a part number (brief, "Matching"): the heights a new part may have
@@ -96,34 +78,6 @@ export class InterchangeService {
       explanation: explain(sold, conflicting, window),
     };
   }
-}
-
-/** The window over sold sets, with the sets that conflict when there is none. */
-export function windowOf(sold: readonly SoldSet[], band: number): WindowState {
-  const counted = sold.filter((s) => s.heights.length > 0);
-  if (!counted.length) return { window: null, conflict: false, conflicting: [], soldSets: 0 };
-  const detail = interchangeWindowDetail(
-    counted.map((s) => s.heights),
-    band,
-  );
-  return {
-    window: detail.window,
-    conflict: detail.window === null,
-    conflicting: detail.conflictingSets.map((i) => counted[i]!),
-    soldSets: counted.length,
-  };
-}
-
-/** True when `height` may join sets sold before (never when they disagree). */
-export function insideWindow(state: WindowState, height: number): boolean {
-  return !state.conflict && inWindow(state.window, height);
-}
-
-/** True when `height` lies in `window`; a null window (nothing sold yet) holds every height. */
-export function inWindow(window: HeightWindow | null, height: number): boolean {
-  if (!window) return true;
-  const slack = 1e-9; // heights are stored to 1e-7 mm; this only absorbs binary noise
-  return height >= window.low - slack && height <= window.high + slack;
 }
 
 function explain(sold: readonly SoldSet[], conflicting: readonly SoldSet[], window: HeightWindow | null): string {

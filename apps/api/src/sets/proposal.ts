@@ -1,6 +1,6 @@
 import { buildSets, setSpread, type HeightWindow } from '@evenset/metrology';
 import type { FreePart } from '@evenset/contracts';
-import { insideWindow, inWindow, type WindowState } from './interchange.service';
+import { insideWindow, inWindow, type WindowState } from './window';
 
 /** Proposed sets and the parts left over, all matching sets sold before and each other. */
 export interface SetChoice<P extends FreePart> {
