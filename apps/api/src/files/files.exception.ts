@@ -26,3 +26,11 @@ export class FileTooLargeException extends DomainException {
     ]);
   }
 }
+
+export class UploadUnreadableException extends DomainException {
+  constructor(field: string) {
+    super('UPLOAD_UNREADABLE', 'The upload could not be read.', 400, [
+      { path: field, message: `Send one file as a multipart form, in the field "${field}".` },
+    ]);
+  }
+}

@@ -1,4 +1,5 @@
 import {
+  BadRequestException,
   CallHandler,
   ExecutionContext,
   mixin,
@@ -8,6 +9,7 @@ import {
 } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import type { Observable } from 'rxjs';
+import { UploadUnreadableException } from './files.exception';
 
 /** What multer hands over for one uploaded file (kept in memory). */
 export interface UploadedFileContent {
@@ -28,6 +30,8 @@ export function singleFileInterceptor(field: string, maxBytes: number, tooLarge:
         return await super.intercept(context, next);
       } catch (error) {
         if (error instanceof PayloadTooLargeException) throw tooLarge();
+        // Multer's refusals (a file under another name, two files, a broken form) name no field.
+        if (error instanceof BadRequestException) throw new UploadUnreadableException(field);
         throw error;
       }
     }

@@ -58,6 +58,7 @@ export class AllExceptionsFilter implements ExceptionFilter {
         },
       };
     }
+    exception = unreadableRequest(exception) ?? exception;
     if (exception instanceof HttpException) {
       return {
         status: exception.getStatus(),
@@ -79,9 +80,22 @@ export class AllExceptionsFilter implements ExceptionFilter {
   }
 }
 
+/**
+ * body-parser refuses a request it cannot read (over the size limit, an unknown charset or content
+ * encoding, broken gzip) with an http-errors error: a 4xx `status` and `expose: true` (body-parser
+ * README, "Errors"). Nest maps only its SyntaxError, so the others would otherwise answer 500.
+ */
+function unreadableRequest(exception: unknown): HttpException | undefined {
+  if (!(exception instanceof Error) || exception instanceof HttpException) return undefined;
+  const { status, expose } = exception as { status?: unknown; expose?: unknown };
+  if (typeof status !== 'number' || status < 400 || status > 499 || expose !== true) return undefined;
+  return new HttpException(exception.message, status);
+}
+
 function httpCode(status: number): string {
   if (status === 404) return 'NOT_FOUND';
   if (status === 413) return 'TOO_LARGE';
+  if (status === 415) return 'UNSUPPORTED_MEDIA_TYPE';
   if (status === 400) return 'BAD_REQUEST';
   return `HTTP_${status}`;
 }
@@ -89,6 +103,7 @@ function httpCode(status: number): string {
 function plainMessage(exception: HttpException): string {
   if (exception.getStatus() === 404) return 'There is nothing at this address.';
   if (exception.getStatus() === 413) return 'The request is too large.';
+  if (exception.getStatus() === 415) return 'Send the body as JSON in UTF-8.';
   if (exception.getStatus() === 400) return 'The request could not be read. Check that it is valid JSON.';
   return exception.message;
 }
