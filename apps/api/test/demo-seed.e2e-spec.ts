@@ -160,4 +160,29 @@ describe('demo data', () => {
     expect(request.passes.map((p) => p.kind)).toEqual(plan.passes.map((p) => p.kind));
     expect(request.cautions).toEqual([...GRINDING_CAUTION_ITEMS]);
   }, 60_000);
+
+  it('lists every demo part in its lot exactly as its own page shows it (status, height, result)', async () => {
+    // The lot list reads the records in one SQL pass (lot-part-facts.ts); the part page reads them
+    // as entities through PartStatusService. Every demo part must come out the same both ways.
+    const engineer = await signInAs(t.app, ['engineer']);
+    const lots = await engineer.agent.get('/api/lots').query({ pageSize: '100' }).expect(200);
+    const seen = new Set<string>();
+    for (const lot of lots.body.items as { id: string }[]) {
+      const rows = await engineer.agent.get(`/api/lots/${lot.id}/parts`).query({ pageSize: '500' }).expect(200);
+      for (const row of rows.body.items as { id: string; status: string; height: number | null; verdict: string }[]) {
+        const part = await engineer.agent.get(`/api/parts/${row.id}`).expect(200);
+        const current = (
+          part.body.inspections as { supersededById: string | null; result: { height: number; verdict: string } }[]
+        ).find((i) => i.supersededById === null);
+        expect([row.status, row.height, row.verdict]).toEqual([
+          part.body.status,
+          current?.result.height ?? null,
+          current?.result.verdict ?? null,
+        ]);
+        seen.add(row.status);
+      }
+    }
+    // Held, guard-band and use-as-is rows are compared the same way in lots and inspections tests.
+    expect([...seen].sort()).toEqual(['conforms', 'not-inspected', 'released', 'rework', 'scrap']);
+  }, 120_000);
 });

@@ -63,9 +63,15 @@ export class BenchRun extends BaseEntity {
     return this.masterEndReadingMm == null ? null : this.masterEndReadingMm - this.masterStartReadingMm;
   }
 
-  /** Drift beyond the limit (compared after rounding away binary noise of the difference). */
   flagged(): boolean {
-    const drift = this.drift();
-    return drift != null && Math.abs(drift) - this.driftLimitMm > 1e-9;
+    return driftFlagged(this.masterStartReadingMm, this.masterEndReadingMm, this.driftLimitMm);
   }
+}
+
+/**
+ * Drift of the master beyond the run's limit, compared after rounding away binary noise of the
+ * difference; a run not yet checked at its end is not flagged.
+ */
+export function driftFlagged(startMm: number, endMm: number | null, limitMm: number): boolean {
+  return endMm != null && Math.abs(endMm - startMm) - limitMm > 1e-9;
 }

@@ -23,8 +23,12 @@ import { Spec } from '../specs/spec.entity';
 import { Lot } from './lot.entity';
 import { LotFullException, LotNumberTakenException, SerialsTakenException } from './lots.exception';
 import { Part } from './part.entity';
-import { partRow, PartStatusService } from './part-status';
+import { computedOf, lotPartFacts } from './lot-part-facts';
+import { partRow, PartStatusService, rowFactsOf } from './part-status';
 import { InterchangeService } from '../sets/interchange.service';
+
+/** Compares like `localeCompare`, without building a collator per call (a lot holds up to 10,000 parts). */
+const { compare } = new Intl.Collator();
 
 /** Columns a lot's part list sorts on; nulls (not inspected) go last either way. */
 const PART_SORTS = ['serial', 'status', 'height', 'flatness', 'parallelism', 'runout', 'expandedUncertainty'] as const;
@@ -86,10 +90,10 @@ export class LotsService {
 
   async detail(id: string): Promise<LotDetail> {
     const lot = await this.get(id);
-    const states = await this.states.states(await this.em.find(Part, { lot }));
+    const facts = await lotPartFacts(this.em, lot.id);
     const counts = Object.fromEntries(PART_STATUSES.map((s) => [s, 0])) as Record<PartStatus, number>;
-    for (const s of states) counts[s.status] += 1;
-    const heights = states.flatMap((s) => (s.result ? [s.result.computed.height] : []));
+    for (const f of facts) counts[f.status] += 1;
+    const heights = facts.flatMap((f) => (f.height === null ? [] : [f.height]));
     const window = await this.interchange.summary(lot.spec.partNumber);
     const spec = lot.spec;
     return {
@@ -107,9 +111,9 @@ export class LotsService {
       counts,
       interchange: {
         ...window.summary,
-        outsideSerials: states
-          .filter((s) => window.outside(s.result?.computed.height ?? null))
-          .map((s) => s.part.serial)
+        outsideSerials: facts
+          .filter((f) => window.outside(f.height))
+          .map((f) => f.serial)
           .sort(),
       },
       heightSpread: heights.length
@@ -124,28 +128,39 @@ export class LotsService {
   }
 
   /**
-   * A lot's parts with their current results. Sorted and paged here rather than in SQL: status and
-   * results are derived from the newest records, and a lot holds at most 10,000 parts.
+   * A lot's parts with their current results, filtered, sorted and paged here: status is derived
+   * from the newest records (`lotPartFacts`, one SQL pass over the lot), and only the rows of the
+   * page read their full computed answer.
    */
   async parts(id: string, query: PartListQuery): Promise<Page<PartRow>> {
     const lot = await this.get(id);
     const q = query.q?.trim().toUpperCase();
     const { outside } = await this.interchange.summary(lot.spec.partNumber);
-    const rows = (await this.states.states(await this.em.find(Part, { lot })))
-      .map((state) => partRow(state, outside))
-      .filter((r) => (!q || r.serial.includes(q)) && (!query.status || r.status === query.status));
+    const facts = (await lotPartFacts(this.em, lot.id)).filter(
+      (f) => (!q || f.serial.includes(q)) && (!query.status || f.status === query.status),
+    );
     const [field, direction] = (query.sort ?? 'serial:asc').split(':') as [string, string];
     const key = (PART_SORTS as readonly string[]).includes(field) ? (field as (typeof PART_SORTS)[number]) : 'serial';
     const sign = direction === 'desc' ? -1 : 1;
-    rows.sort((a, b) => {
+    facts.sort((a, b) => {
       const [x, y] = [a[key], b[key]];
-      if (x === y) return a.serial.localeCompare(b.serial);
+      if (x === y) return compare(a.serial, b.serial);
       if (x === null) return 1;
       if (y === null) return -1;
-      return sign * (typeof x === 'number' && typeof y === 'number' ? x - y : String(x).localeCompare(String(y)));
+      return sign * (typeof x === 'number' && typeof y === 'number' ? x - y : compare(String(x), String(y)));
     });
     const start = query.page * query.pageSize;
-    return { items: rows.slice(start, start + query.pageSize), total: rows.length };
+    const page = facts.slice(start, start + query.pageSize);
+    const computed = await computedOf(
+      this.em,
+      page.flatMap((f) => (f.resultId ? [f.resultId] : [])),
+    );
+    return {
+      items: page.map((f) =>
+        partRow({ ...f, computed: (f.resultId && computed.get(f.resultId)) || null, runoutMm: f.runout }, outside),
+      ),
+      total: facts.length,
+    };
   }
 
   async previewSerials(id: string, pattern: SerialPattern): Promise<SerialPreview> {
@@ -180,7 +195,7 @@ export class LotsService {
       throw error;
     }
     // New parts have no results yet, so none can be outside the window.
-    return { items: (await this.states.states(parts)).map((state) => partRow(state, () => null)) };
+    return { items: (await this.states.states(parts)).map((state) => partRow(rowFactsOf(state), () => null)) };
   }
 
   private async taken(lot: Lot, serials: string[]): Promise<string[]> {

@@ -1,7 +1,7 @@
 import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable } from '@nestjs/common';
-import type { PartRow, PartStatus } from '@evenset/contracts';
-import type { InspectionResult } from '../inspections/inspection-result.entity';
+import type { DispositionKind, PartRow, PartStatus, Verdict } from '@evenset/contracts';
+import type { ComputedResult, InspectionResult } from '../inspections/inspection-result.entity';
 import { Inspection } from '../inspections/inspection.entity';
 import { InspectionsService } from '../inspections/inspections.service';
 import { PartDisposition } from './part-disposition.entity';
@@ -52,35 +52,77 @@ export class PartStatusService {
       const inspection = current.get(part.id) ?? null;
       const result = inspection ? (results.get(inspection.id) ?? null) : null;
       const disposition = dispositions.get(part.id) ?? null;
-      return { part, inspection, result, disposition, status: statusOf(inspection, result, disposition) };
+      return { part, inspection, result, disposition, status: statusOf(factsOf(inspection, result, disposition)) };
     });
   }
 }
 
-function statusOf(
+/** What a part's status derives from, whether read as entities or straight from SQL. */
+export interface StatusFacts {
+  /** The current inspection's time. */
+  inspectedAt: Date | null;
+  runFlagged: boolean;
+  verdict: Verdict | null;
+  disposition: { kind: DispositionKind; createdAt: Date } | null;
+}
+
+function factsOf(
   inspection: Inspection | null,
   result: InspectionResult | null,
   disposition: PartDisposition | null,
-): PartStatus {
-  if (disposition && (!inspection || disposition.createdAt >= inspection.createdAt))
-    return disposition.kind === 'release' ? 'released' : disposition.kind;
-  if (!inspection || !result) return 'not-inspected';
-  if (inspection.run.flagged()) return 'held';
-  return result.verdict;
+): StatusFacts {
+  return {
+    inspectedAt: inspection?.createdAt ?? null,
+    runFlagged: inspection?.run.flagged() ?? false,
+    verdict: result?.verdict ?? null,
+    disposition,
+  };
 }
 
-/** A row of a lot's part list; `outsideWindow` tells whether a height would not match sets sold before. */
-export function partRow(state: PartState, outsideWindow: (height: number | null) => boolean | null): PartRow {
-  const { part, inspection, result, disposition } = state;
-  const computed = result?.computed;
+export function statusOf({ inspectedAt, runFlagged, verdict, disposition }: StatusFacts): PartStatus {
+  if (disposition && (!inspectedAt || disposition.createdAt >= inspectedAt))
+    return disposition.kind === 'release' ? 'released' : disposition.kind;
+  if (!inspectedAt || !verdict) return 'not-inspected';
+  if (runFlagged) return 'held';
+  return verdict;
+}
+
+/** What a row of a lot's part list shows, from entities or straight from SQL. */
+export interface PartRowFacts {
+  id: string;
+  serial: string;
+  status: PartStatus;
+  computed: ComputedResult | null;
+  runoutMm: number | null;
+  runFlagged: boolean;
+  inspectedAt: Date | null;
+  disposition: DispositionKind | null;
+}
+
+export function rowFactsOf({ part, inspection, result, disposition, status }: PartState): PartRowFacts {
   return {
     id: part.id,
     serial: part.serial,
-    status: state.status,
+    status,
+    computed: result?.computed ?? null,
+    runoutMm: result?.runoutMm ?? null,
+    runFlagged: inspection?.run.flagged() ?? false,
+    inspectedAt: inspection?.createdAt ?? null,
+    disposition: disposition?.kind ?? null,
+  };
+}
+
+/** A row of a lot's part list; `outsideWindow` tells whether a height would not match sets sold before. */
+export function partRow(facts: PartRowFacts, outsideWindow: (height: number | null) => boolean | null): PartRow {
+  const { computed } = facts;
+  return {
+    id: facts.id,
+    serial: facts.serial,
+    status: facts.status,
     height: computed?.height ?? null,
     flatness: computed?.flatness?.minimumZone ?? null,
     parallelism: computed?.parallelism?.value ?? null,
-    runout: result?.runoutMm ?? null,
+    runout: facts.runoutMm,
     totalRunout: computed?.runout?.total ?? null,
     expandedUncertainty: computed?.expandedUncertainty ?? null,
     verdict: computed?.verdict ?? null,
@@ -90,9 +132,9 @@ export function partRow(state: PartState, outsideWindow: (height: number | null)
       parallelism: computed?.decisions.parallelism?.verdict ?? null,
       runout: computed?.decisions.runout?.verdict ?? null,
     },
-    runFlagged: inspection?.run.flagged() ?? false,
-    inspectedAt: inspection?.createdAt.toISOString() ?? null,
-    disposition: disposition?.kind ?? null,
+    runFlagged: facts.runFlagged,
+    inspectedAt: facts.inspectedAt?.toISOString() ?? null,
+    disposition: facts.disposition,
     outsideWindow: outsideWindow(computed?.height ?? null),
   };
 }
