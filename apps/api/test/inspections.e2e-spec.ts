@@ -59,6 +59,10 @@ describe('Bench runs and inspections', () => {
     // Part on the plate: parallelism is the range of the top readings (ISO 1101 zone parallel to the plate).
     expect(inspection.result.parallelism!.value).toBeCloseTo(0.00002 * IN, 9);
     expect(inspection.readings.map((r) => r.station)).toEqual(['P1', 'P2', 'P3', 'P4', 'P5']);
+    // The answer is built from the rows as stored (values rounded to the columns' scales), without
+    // reading them again: it must equal what reading them back gives.
+    const detail = (await bench.inspector.agent.get(`/api/parts/${part.id}`).expect(200)).body as PartDetail;
+    expect(detail.inspections).toEqual([inspection]);
 
     const stored = await t.app.get(EntityManager).fork().findOneOrFail(InspectionResult, { inspection: inspection.id });
     expect(stored.heightMm).toBeCloseTo(expected, 7);

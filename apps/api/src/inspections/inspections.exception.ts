@@ -21,6 +21,13 @@ export class RunEndedException extends DomainException {
   }
 }
 
+/** A run is one inspector's set-up (their master check, their temperatures): only they record in it. */
+export class RunNotYoursException extends DomainException {
+  constructor(inspectorName: string) {
+    super('RUN_NOT_YOURS', `This bench run belongs to ${inspectorName}; start a run of your own.`, 403);
+  }
+}
+
 export class ReadingsRefusedException extends DomainException {
   constructor(details: ApiErrorDetail[]) {
     super('READINGS_REFUSED', 'Some readings need attention; nothing was saved.', 400, details);
@@ -48,14 +55,24 @@ export class CsvRefusedException extends DomainException {
   }
 }
 
+const MAX_MB = MAX_READINGS_FILE_BYTES / (1024 * 1024);
+
 export class CsvTooLargeException extends DomainException {
   constructor() {
     super(
       'CSV_TOO_LARGE',
-      `A readings file can be at most ${MAX_READINGS_FILE_BYTES / (1024 * 1024)} MB and ${MAX_READINGS_ROWS.toLocaleString('en')} rows; split it into several uploads.`,
+      `A readings file can be at most ${MAX_MB} MB and ${MAX_READINGS_ROWS.toLocaleString('en')} rows; split it into several uploads.`,
       413,
-      [{ path: 'file', message: 'The file is too large.' }],
+      [{ path: 'file', message: `The file is over ${MAX_MB} MB.` }],
     );
+  }
+}
+
+/** A file whose content is not CSV text, whatever its name says (`what` it looks like instead). */
+export class CsvNotTextException extends DomainException {
+  constructor(name: string, what: string) {
+    const message = `"${name.slice(0, 100)}" is ${what}, not a CSV file: export the readings as comma-separated text (UTF-8).`;
+    super('FILE_TYPE_REFUSED', message, 400, [{ path: 'file', message }]);
   }
 }
 

@@ -32,15 +32,24 @@ import {
   InspectionSupersedeException,
   ReadingsRefusedException,
   RunEndedException,
+  RunNotYoursException,
 } from './inspections.exception';
 import { matchReadings, planStations, type StationValue } from './measurement-plan';
 
+/** A part as recording needs it: no entity, so an import of thousands stays out of the unit of work. */
+export type PartRef = Pick<Part, 'id' | 'serial'>;
+
 /** One part's readings ready to record (mm, plan order). */
 export interface PartReadings {
-  part: Part;
+  part: PartRef;
   values: StationValue[];
   supersedes?: Inspection;
   reason?: string;
+}
+
+/** Another inspector may view a run, never record in it nor end it. */
+function ownRun(actor: SessionUser, run: BenchRun): void {
+  if (run.inspectorId !== actor.id) throw new RunNotYoursException(run.inspectorName);
 }
 
 // Columns written in bulk by `record`, with their SQL types (as in the migration).
@@ -87,11 +96,10 @@ const READING_COLUMNS = {
   reading_mm: 'numeric',
 };
 
-/** What `record` wrote for one part. */
+/** What `record` wrote: per part, and the rows as stored when asked for (else empty). */
 export interface Recorded {
-  id: string;
-  part: Part;
-  verdict: Verdict;
+  parts: { id: string; part: PartRef; verdict: Verdict }[];
+  rows: Record<'inspections' | 'readings' | 'results', Record<string, unknown>[]>;
 }
 
 /** The stored inputs of an inspection that its computation reads. */
@@ -199,6 +207,7 @@ export class InspectionsService {
 
   async endRun(actor: SessionUser, id: string, input: EndRunInput): Promise<RunView> {
     const run = await this.getRun(id);
+    ownRun(actor, run);
     if (run.endedAt) throw new RunEndedException();
     run.masterEndReadingMm = toMm(input.masterEndReading, input.unit);
     run.endedAt = new Date();
@@ -230,8 +239,14 @@ export class InspectionsService {
     );
     if (problems.length) throw new ReadingsRefusedException(problems);
     const supersedes = input.supersedesId ? await this.supersedable(part, input.supersedesId) : undefined;
-    const [recorded] = await this.record(actor, run, [{ part, values, supersedes, reason: input.reason }]);
-    return (await this.views([await this.em.findOneOrFail(Inspection, { id: recorded!.id })]))[0]!;
+    const { rows } = await this.record(actor, run, [{ part, values, supersedes, reason: input.reason }], true);
+    // The view from the rows as stored, mapped as a read would map them, without reading them again;
+    // a new inspection is corrected by nothing yet.
+    const readings = rows.readings
+      .map((r) => this.em.map(InspectionReading, r))
+      .sort((a, b) => a.position - b.position);
+    const results = rows.results.map((r) => this.em.map(InspectionResult, r));
+    return this.view(this.em.map(Inspection, rows.inspections[0]!), readings, results, undefined);
   }
 
   /** A run that may still take inspections. */
@@ -244,102 +259,57 @@ export class InspectionsService {
   /**
    * Computes and stores the inspections of one run in one transaction: inspections, their readings,
    * first results and audit entries, all or none. Written with bulk inserts rather than the unit of
-   * work, so a CSV of 100,000 readings stays within seconds.
+   * work, so a CSV of 100,000 readings stays within seconds: in slices of parts, each written while
+   * the next is computed (PostgreSQL stores while Node computes), so that no statement carries more
+   * than a slice and the event loop serves other requests in between.
    */
-  async record(actor: SessionUser, run: BenchRun, parts: PartReadings[]): Promise<Recorded[]> {
-    const spec = run.lot.spec;
-    const calibration = run.masterCalibration;
+  async record(actor: SessionUser, run: BenchRun, parts: PartReadings[], returnRows = false): Promise<Recorded> {
+    ownRun(actor, run);
     const now = new Date();
-    const inspections: Record<string, unknown>[] = [];
-    const results: Record<string, unknown>[] = [];
-    const readings: Record<string, unknown>[] = [];
-    const audits: AuditRecord[] = [];
-    const recorded: Recorded[] = [];
-    for (const { part, values, supersedes, reason } of parts) {
-      const inputs = {
-        spec,
-        masterReadingMm: run.masterStartReadingMm,
-        instrumentResolutionMm: run.instrument.resolutionMm,
-        masterTemperatureC: run.masterTemperatureC,
-        partTemperatureC: run.partTemperatureC,
-        partExpansionPerK: spec.expansionPerK(),
-        masterExpansionPerK: run.master.material.expansionPerK,
-      };
-      const id = randomUUID();
-      inspections.push({
-        id,
-        created_at: now,
-        part_id: part.id,
-        run_id: run.id,
-        spec_id: spec.id,
-        master_calibration_id: calibration.id,
-        instrument_id: run.instrument.id,
-        instrument_resolution_mm: inputs.instrumentResolutionMm,
-        master_reading_mm: inputs.masterReadingMm,
-        master_temperature_c: inputs.masterTemperatureC,
-        part_temperature_c: inputs.partTemperatureC,
-        part_expansion_per_k: inputs.partExpansionPerK,
-        master_expansion_per_k: inputs.masterExpansionPerK,
-        inspector_id: actor.id,
-        inspector_name: actor.displayName,
-        supersedes_id: supersedes?.id ?? null,
-        reason: reason ?? null,
-      });
-      const result = resultRow(inputs, values, calibration, 'inspection', now);
-      results.push({
-        id: result.id,
-        created_at: now,
-        inspection_id: id,
-        reason: result.reason,
-        master_calibration_id: calibration.id,
-        height_mm: result.heightMm,
-        expanded_uncertainty_mm: result.expandedUncertaintyMm,
-        flatness_mm: result.flatnessMm,
-        parallelism_mm: result.parallelismMm,
-        runout_mm: result.runoutMm,
-        verdict: result.verdict,
-        computed: result.computed,
-      });
-      values.forEach((v, position) =>
-        readings.push({
-          id: randomUUID(),
-          created_at: now,
-          inspection_id: id,
-          position,
-          station: v.name,
-          kind: v.kind,
-          reading_mm: v.reading,
-        }),
-      );
-      audits.push({
-        action: supersedes ? 'inspection.correct' : 'inspection.create',
-        subjectType: 'inspection',
-        subjectId: id,
-        after: {
-          part: part.serial,
-          run: run.id,
-          readings: values.length,
-          heightMm: result.heightMm,
-          verdict: result.verdict,
-          supersedes: supersedes?.id,
-        },
-        reason,
-      });
-      recorded.push({ id, part, verdict: result.verdict });
-    }
-    await this.em.transactional(async (em) => {
-      try {
-        await insertRows(em, 'inspection', INSPECTION_COLUMNS, inspections);
-      } catch (error) {
-        if (error instanceof UniqueConstraintViolationException)
-          throw new InspectionSupersedeException('That inspection has already been corrected; correct the newest one.');
-        throw error;
+    return this.em.transactional(async (em) => {
+      const recorded: Recorded = { parts: [], rows: { inspections: [], readings: [], results: [] } };
+      const failures: unknown[] = [];
+      let writing = Promise.resolve();
+      for (let start = 0; start < parts.length && !failures.length; start += SLICE) {
+        const slice = await sliceRows(actor, run, parts.slice(start, start + SLICE), now);
+        recorded.parts.push(...slice.recorded);
+        writing = writing.then(async () => {
+          if (failures.length) return;
+          try {
+            await this.writeSlice(em, actor, slice, returnRows ? recorded.rows : undefined);
+          } catch (error) {
+            failures.push(error);
+          }
+        });
       }
-      await insertRows(em, 'inspection_result', RESULT_COLUMNS, results);
-      await insertRows(em, 'inspection_reading', READING_COLUMNS, readings);
-      await this.audit.recordMany(em, actor, audits);
+      await writing;
+      if (failures.length) throw failures[0];
+      return recorded;
     });
-    return recorded;
+  }
+
+  /** One slice's rows, in the order their keys need; with `stored`, the rows as stored go there. */
+  private async writeSlice(
+    em: EntityManager,
+    actor: SessionUser,
+    slice: SliceRows,
+    stored: Recorded['rows'] | undefined,
+  ): Promise<void> {
+    const returning = stored !== undefined;
+    let inspections: Record<string, unknown>[];
+    try {
+      inspections = await insertRows(em, 'inspection', INSPECTION_COLUMNS, slice.inspections, returning);
+    } catch (error) {
+      if (error instanceof UniqueConstraintViolationException)
+        throw new InspectionSupersedeException('That inspection has already been corrected; correct the newest one.');
+      throw error;
+    }
+    const readings = await insertRows(em, 'inspection_reading', READING_COLUMNS, slice.readings, returning);
+    const results = await insertRows(em, 'inspection_result', RESULT_COLUMNS, slice.results, returning);
+    stored?.inspections.push(...inspections);
+    stored?.readings.push(...readings);
+    stored?.results.push(...results);
+    await this.audit.recordMany(em, actor, slice.audits);
   }
 
   /**
@@ -413,32 +383,47 @@ export class InspectionsService {
     const correctedBy = new Map(
       (await this.em.find(Inspection, { supersedes: { $in: ids } })).map((c) => [c.supersedes!.id, c.id]),
     );
-    return inspections.map((i) => {
-      const own = results.filter((r) => r.inspection.id === i.id).map((r) => r.toView());
-      return {
-        id: i.id,
-        partId: i.part.id,
-        serial: i.part.serial,
-        runId: i.run.id,
-        specId: i.spec.id,
-        masterCalibrationId: i.masterCalibration.id,
-        instrumentId: i.instrumentId,
-        instrumentResolution: i.instrumentResolutionMm,
-        masterTemperature: i.masterTemperatureC,
-        partTemperature: i.partTemperatureC,
-        partExpansionPerK: i.partExpansionPerK,
-        masterExpansionPerK: i.masterExpansionPerK,
-        inspector: i.inspectorName,
-        runFlagged: i.run.flagged(),
-        supersedesId: i.supersedes?.id ?? null,
-        supersededById: correctedBy.get(i.id) ?? null,
-        reason: i.reason,
-        readings: (readings.get(i.id) ?? []).map((r) => ({ station: r.station, kind: r.kind, reading: r.readingMm })),
-        result: own[0]!,
-        results: own,
-        createdAt: i.createdAt.toISOString(),
-      };
-    });
+    return inspections.map((i) =>
+      this.view(
+        i,
+        readings.get(i.id) ?? [],
+        results.filter((r) => r.inspection.id === i.id),
+        correctedBy.get(i.id),
+      ),
+    );
+  }
+
+  /** One inspection's view; its part and run loaded, its results newest first. */
+  private view(
+    i: Inspection,
+    readings: InspectionReading[],
+    results: InspectionResult[],
+    supersededById: string | undefined,
+  ): InspectionView {
+    const own = results.map((r) => r.toView());
+    return {
+      id: i.id,
+      partId: i.part.id,
+      serial: i.part.serial,
+      runId: i.run.id,
+      specId: i.spec.id,
+      masterCalibrationId: i.masterCalibration.id,
+      instrumentId: i.instrumentId,
+      instrumentResolution: i.instrumentResolutionMm,
+      masterTemperature: i.masterTemperatureC,
+      partTemperature: i.partTemperatureC,
+      partExpansionPerK: i.partExpansionPerK,
+      masterExpansionPerK: i.masterExpansionPerK,
+      inspector: i.inspectorName,
+      runFlagged: i.run.flagged(),
+      supersedesId: i.supersedes?.id ?? null,
+      supersededById: supersededById ?? null,
+      reason: i.reason,
+      readings: readings.map((r) => ({ station: r.station, kind: r.kind, reading: r.readingMm })),
+      result: own[0]!,
+      results: own,
+      createdAt: i.createdAt.toISOString(),
+    };
   }
 
   /** The result in force (newest) of each inspection. */
@@ -502,6 +487,100 @@ export class InspectionsService {
       createdAt: run.createdAt.toISOString(),
     };
   }
+}
+
+/** Parts written at a time (a few MB of rows), and computed between two turns of the event loop. */
+const SLICE = 200;
+const TURN = 20;
+
+/** The rows recording writes for some parts of one run, keyed by column; results computed here. */
+interface SliceRows {
+  inspections: Record<string, unknown>[];
+  readings: Record<string, unknown>[];
+  results: Record<string, unknown>[];
+  audits: AuditRecord[];
+  recorded: Recorded['parts'];
+}
+
+/** The rows of `parts`, yielding to the event loop every few parts: queued writes go on meanwhile. */
+async function sliceRows(actor: SessionUser, run: BenchRun, parts: PartReadings[], now: Date): Promise<SliceRows> {
+  const spec = run.lot.spec;
+  const calibration = run.masterCalibration;
+  const inputs = {
+    spec,
+    masterReadingMm: run.masterStartReadingMm,
+    instrumentResolutionMm: run.instrument.resolutionMm,
+    masterTemperatureC: run.masterTemperatureC,
+    partTemperatureC: run.partTemperatureC,
+    partExpansionPerK: spec.expansionPerK(),
+    masterExpansionPerK: run.master.material.expansionPerK,
+  };
+  const rows: SliceRows = { inspections: [], readings: [], results: [], audits: [], recorded: [] };
+  for (const [i, { part, values, supersedes, reason }] of parts.entries()) {
+    if (i > 0 && i % TURN === 0) await new Promise((resolve) => setImmediate(resolve));
+    const id = randomUUID();
+    rows.inspections.push({
+      id,
+      created_at: now,
+      part_id: part.id,
+      run_id: run.id,
+      spec_id: spec.id,
+      master_calibration_id: calibration.id,
+      instrument_id: run.instrument.id,
+      instrument_resolution_mm: inputs.instrumentResolutionMm,
+      master_reading_mm: inputs.masterReadingMm,
+      master_temperature_c: inputs.masterTemperatureC,
+      part_temperature_c: inputs.partTemperatureC,
+      part_expansion_per_k: inputs.partExpansionPerK,
+      master_expansion_per_k: inputs.masterExpansionPerK,
+      inspector_id: actor.id,
+      inspector_name: actor.displayName,
+      supersedes_id: supersedes?.id ?? null,
+      reason: reason ?? null,
+    });
+    values.forEach((v, position) =>
+      rows.readings.push({
+        id: randomUUID(),
+        created_at: now,
+        inspection_id: id,
+        position,
+        station: v.name,
+        kind: v.kind,
+        reading_mm: v.reading,
+      }),
+    );
+    const result = resultRow(inputs, values, calibration, 'inspection', now);
+    rows.results.push({
+      id: result.id,
+      created_at: now,
+      inspection_id: id,
+      reason: result.reason,
+      master_calibration_id: calibration.id,
+      height_mm: result.heightMm,
+      expanded_uncertainty_mm: result.expandedUncertaintyMm,
+      flatness_mm: result.flatnessMm,
+      parallelism_mm: result.parallelismMm,
+      runout_mm: result.runoutMm,
+      verdict: result.verdict,
+      computed: result.computed,
+    });
+    rows.audits.push({
+      action: supersedes ? 'inspection.correct' : 'inspection.create',
+      subjectType: 'inspection',
+      subjectId: id,
+      after: {
+        part: part.serial,
+        run: run.id,
+        readings: values.length,
+        heightMm: result.heightMm,
+        verdict: result.verdict,
+        supersedes: supersedes?.id,
+      },
+      reason,
+    });
+    rows.recorded.push({ id, part, verdict: result.verdict });
+  }
+  return rows;
 }
 
 function roundCelsius(value: number): number {

@@ -1,4 +1,6 @@
-import { parseReadingsCsv } from './readings-csv';
+import fc from 'fast-check';
+import Papa from 'papaparse';
+import { eachCsvRow, parseReadingsCsv } from './readings-csv';
 
 const parse = (text: string) => parseReadingsCsv(Buffer.from(text, 'utf8'));
 
@@ -18,5 +20,23 @@ describe('parseReadingsCsv', () => {
     const parsed = parse(['serial,station,reading,unit', ...values.map((v) => `K-1,P1,${v},mm`)].join('\n'));
     expect(parsed.readings.map((r) => r.readingMm)).toEqual([1, -0.5, 0.25, 3]);
     expect(parsed.errors.map((e) => e.value)).toEqual(['1e-3', 'NaN', 'Infinity', '0x10', '']);
+  });
+});
+
+describe('eachCsvRow', () => {
+  it('sees the rows, numbered, that papaparse gives for the whole file at once', () => {
+    // Row numbers are lines of the file as long as the parse is the same one: checked on
+    // random text made of the characters that matter to CSV (RFC 4180: quotes, commas, line ends).
+    const text = fc
+      .array(fc.constantFrom('a', '1', '.', '-', ' ', ',', ',', '"', '\n', '\r\n', '\r', ';'), { maxLength: 80 })
+      .map((chars) => chars.join(''));
+    fc.assert(
+      fc.property(text, (t) => {
+        const rows: [string[], number][] = [];
+        eachCsvRow(t, (fields, row) => void rows.push([fields, row]));
+        expect(rows).toEqual(Papa.parse<string[]>(t, { delimiter: ',' }).data.map((fields, i) => [fields, i + 1]));
+      }),
+      { seed: 20261202, numRuns: 2000 },
+    );
   });
 });

@@ -1,10 +1,9 @@
 import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable } from '@nestjs/common';
 import type { ReadingsImport, ReadingsPreview, RowError, SessionUser } from '@evenset/contracts';
-import { Part } from '../lots/part.entity';
 import type { BenchRun } from './bench-run.entity';
 import { CsvRefusedException } from './inspections.exception';
-import { InspectionsService, type PartReadings } from './inspections.service';
+import { InspectionsService, type PartReadings, type PartRef } from './inspections.service';
 import { matchReadings, planStations } from './measurement-plan';
 import { parseReadingsCsv } from './readings-csv';
 
@@ -29,7 +28,7 @@ export class ReadingsImportService {
     const run = await this.inspections.openRun(runId);
     const { preview, parts } = await this.map(run, content);
     if (preview.errors.length) throw new CsvRefusedException(preview.errors);
-    const recorded = await this.inspections.record(actor, run, parts);
+    const recorded = (await this.inspections.record(actor, run, parts)).parts;
     return {
       inspections: recorded.length,
       readings: parts.reduce((n, p) => n + p.values.length, 0),
@@ -48,10 +47,13 @@ export class ReadingsImportService {
     const errors: RowError[] = [...parsed.errors];
     const stations = planStations(run.lot.spec.plan);
     const stationNames = new Set(stations.map((s) => s.name));
+    // Plain rows, not entities: thousands of parts need not enter the unit of work.
     const lotParts = new Map(
-      (await this.em.find(Part, { lot: run.lot }, { orderBy: { serial: 'asc' } })).map((p) => [p.serial, p]),
+      (
+        await this.em.getConnection().execute<PartRef[]>('select id, serial from part where lot_id = ?', [run.lot.id])
+      ).map((p) => [p.serial, p]),
     );
-    const bySerial = new Map<string, { part: Part; rows: typeof parsed.readings }>();
+    const bySerial = new Map<string, { part: PartRef; rows: typeof parsed.readings }>();
     const seen = new Map<string, number>();
     for (const reading of parsed.readings) {
       const part = lotParts.get(reading.serial);

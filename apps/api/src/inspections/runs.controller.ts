@@ -10,16 +10,20 @@ import {
 } from '@evenset/contracts';
 import { Roles } from '../common/auth/access.decorators';
 import { CurrentUser } from '../common/auth/current-user.decorator';
+import { describeNonText } from '../files/file-type';
 import { singleFileInterceptor, type UploadedFileContent } from '../files/single-file.interceptor';
 import { CreateInspectionDto, CreateRunDto, EndRunDto, RunIdDto } from './inspections.dto';
-import { CsvMissingException, CsvTooLargeException } from './inspections.exception';
+import { CsvMissingException, CsvNotTextException, CsvTooLargeException } from './inspections.exception';
 import { InspectionsService } from './inspections.service';
 import { ReadingsImportService } from './readings-import.service';
 
 const CsvUpload = singleFileInterceptor('file', MAX_READINGS_FILE_BYTES, () => new CsvTooLargeException());
 
+/** The uploaded readings, refused unless they read as text (judged by content, not by name). */
 function contentOf(file: UploadedFileContent | undefined): Buffer {
   if (!file) throw new CsvMissingException();
+  const notText = describeNonText(file.buffer);
+  if (notText) throw new CsvNotTextException(file.originalname, notText);
   return file.buffer;
 }
 
