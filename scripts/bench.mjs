@@ -35,6 +35,18 @@ const AREAS = [
     name: 'api: lot review and trends on 500 lots / 20,000 parts vs GET /api/health',
     script: 'scripts/bench-api.mjs',
   },
+  {
+    name: 'web: first render of the Bench and lot review, and the parts grid of a 10,000-part lot, vs the sign-in page',
+    script: 'scripts/bench-web.mjs',
+  },
+  {
+    name: 'save: one 25-station inspection under 20 concurrent inspectors vs a bare pg insert',
+    script: 'scripts/bench-save.mjs',
+  },
+  {
+    name: 'import: 100,000 readings stored through the API vs PostgreSQL COPY',
+    script: 'scripts/bench-import.mjs',
+  },
 ];
 
 const filters = process.argv.slice(2);

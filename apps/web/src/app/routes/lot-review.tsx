@@ -5,6 +5,7 @@ import { SectionCard } from '../../components/display/section-card';
 import { LoadFailed } from '../../components/load-failed';
 import { PageHeader } from '../../components/page-header';
 import { PageLoading } from '../../components/page-loading';
+import { useRenderMark } from '../../components/use-render-mark';
 import { paths } from '../../config/paths';
 import { useSignedInUser } from '../../features/auth/hooks/use-signed-in-user';
 import { useLot, useLotParts } from '../../features/lots/api/get-lot';
@@ -13,13 +14,15 @@ import { InterchangeNotice } from '../../features/lots/components/interchange-no
 import { LotSummary } from '../../features/lots/components/lot-summary';
 import { PartsGrid } from '../../features/lots/components/parts-grid';
 
-const ALL_PARTS = { page: 0, pageSize: 500, sort: 'serial:asc' } as const;
+// The largest page the API serves: a lot of up to 500 parts is charted whole, a bigger one in part (the chart says so).
+const CHART_PARTS = { page: 0, pageSize: 500, sort: 'serial:asc' } as const;
 
 export function LotReviewRoute() {
   const { lotId = '' } = useParams();
   const { displayUnit } = useSignedInUser();
   const { data: lot, error, mutate } = useLot(lotId);
-  const chartParts = useLotParts(lotId, ALL_PARTS);
+  const chartParts = useLotParts(lotId, CHART_PARTS);
+  useRenderMark('lot-review', Boolean(lot && chartParts.data));
 
   if (error) return <LoadFailed what="lot" error={error} onRetry={() => void mutate()} />;
   if (!lot) return <PageLoading />;
@@ -39,6 +42,7 @@ export function LotReviewRoute() {
             spec={lot.spec}
             window={lot.interchange.window}
             parts={chartParts.data?.items ?? []}
+            total={chartParts.data?.total ?? 0}
             unit={displayUnit}
           />
         </SectionCard>

@@ -6,6 +6,7 @@ import Typography from '@mui/material/Typography';
 import { Link as RouterLink, Navigate, useSearchParams } from 'react-router-dom';
 import { EvensetMark } from '../../components/layouts/evenset-mark';
 import { PageLoading } from '../../components/page-loading';
+import { useRenderMark } from '../../components/use-render-mark';
 import { paths } from '../../config/paths';
 import { MatchedSetArt } from '../../features/auth/components/matched-set-art';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
@@ -22,6 +23,7 @@ function safeNext(next: string | null): string {
 export function SignInRoute() {
   const { state } = useAuth();
   const [params] = useSearchParams();
+  useRenderMark('sign-in', state.status === 'signed-out');
   if (state.status === 'signed-in') return <Navigate to={safeNext(params.get('next'))} replace />;
   if (state.status === 'loading') return <PageLoading label="Checking your sign-in…" />;
 

@@ -8,6 +8,7 @@ import type { z } from 'zod';
 import { FieldGrid } from '../../../components/form/field-grid';
 import { FormNumberField } from '../../../components/form/form-number-field';
 import { FormSelectField } from '../../../components/form/form-select-field';
+import { useRenderMark } from '../../../components/use-render-mark';
 import { useLots } from '../../lots/api/get-lots';
 import { useUsableInstruments, useUsableMasters } from '../api/bench-choices';
 import { LotSpecLine } from './lot-spec-line';
@@ -23,6 +24,7 @@ export function BenchSetup({ unit, onReady }: { unit: DisplayUnit; onReady: (set
   const lots = useLots(RECENT_LOTS);
   const masters = useUsableMasters();
   const instruments = useUsableInstruments();
+  useRenderMark('bench', Boolean(lots.data && masters.data && instruments.data));
   const { control, handleSubmit } = useForm<BenchSetupInput>({
     resolver: zodResolver(setupSchema),
     defaultValues: { lotId: '', masterId: '', instrumentId: '', masterTemperature: 20, partTemperature: 20 },

@@ -16,6 +16,9 @@ export function WindowText({ interchange, unit }: { interchange: WindowSummary; 
   );
 }
 
+// A big lot can have thousands of such parts: the notice names a few, the parts list flags every one.
+const NAMED_SERIALS = 10;
+
 /** Warns about the lot's parts that would not match sets sold before; they are never offered for sets. */
 export function InterchangeNotice({ lot, unit }: { lot: LotDetail; unit: DisplayUnit }) {
   const { outsideSerials, conflict } = lot.interchange;
@@ -27,10 +30,15 @@ export function InterchangeNotice({ lot, unit }: { lot: LotDetail; unit: Display
       </Alert>
     );
   if (!outsideSerials.length) return null;
+  const more = outsideSerials.length - NAMED_SERIALS;
+  const named =
+    more > 0
+      ? `${outsideSerials.slice(0, NAMED_SERIALS).join(', ')} and ${more.toLocaleString('en')} more parts`
+      : outsideSerials.join(', ');
   return (
     <Alert severity="warning">
-      {outsideSerials.join(', ')} would not match {lot.spec.partNumber} sets sold before: the height is outside the
-      interchange window (<WindowText interchange={lot.interchange} unit={unit} />
+      {named} would not match {lot.spec.partNumber} sets sold before: the height is outside the interchange window (
+      <WindowText interchange={lot.interchange} unit={unit} />
       ). {outsideSerials.length === 1 ? 'It is' : 'They are'} not offered for new sets.
     </Alert>
   );

@@ -21,6 +21,8 @@ interface LotHeightsChartProps {
   /** Heights that still match sets sold before; null when none are sold or they disagree. */
   window: LotDetail['interchange']['window'];
   parts: readonly PartRow[];
+  /** How many parts the lot has; more than `parts` when only the first page of them is charted. */
+  total: number;
   unit: DisplayUnit;
 }
 
@@ -28,7 +30,7 @@ interface LotHeightsChartProps {
  * Each inspected part's height with its U as an error bar, against the band, the nominal and the
  * interchange window (shaded).
  */
-export function LotHeightsChart({ spec, window, parts, unit }: LotHeightsChartProps) {
+export function LotHeightsChart({ spec, window, parts, total, unit }: LotHeightsChartProps) {
   const { decimals, symbol } = displayResolution(unit, 'fine');
   const inUnit = (mm: number) => fromMillimetres(mm, unit);
   const lower = inUnit(spec.nominal + spec.band.lower);
@@ -53,7 +55,7 @@ export function LotHeightsChart({ spec, window, parts, unit }: LotHeightsChartPr
 
   if (points.length === 0)
     return <Typography sx={{ color: 'text.secondary' }}>No part of this lot has been inspected yet.</Typography>;
-  return (
+  const chart = (
     <Box
       role="img"
       aria-label={`Heights of ${points.length} parts against the band ${format(lower)} to ${format(upper)} ${symbol}`}
@@ -117,5 +119,15 @@ export function LotHeightsChart({ spec, window, parts, unit }: LotHeightsChartPr
         </ScatterChart>
       </ResponsiveContainer>
     </Box>
+  );
+  if (total <= parts.length) return chart;
+  return (
+    <>
+      {chart}
+      <Typography variant="body2" sx={{ color: 'text.secondary', mt: 1 }}>
+        Charted: the first {parts.length.toLocaleString('en')} parts by serial of {total.toLocaleString('en')}; the
+        parts list below holds them all.
+      </Typography>
+    </>
   );
 }

@@ -11,6 +11,7 @@ import { AppDataGrid } from '../../../components/app-data-grid';
 import { lengthColumn } from '../../../components/data-grid/length-column';
 import { linkColumn } from '../../../components/data-grid/link-column';
 import { useGridListQuery } from '../../../components/data-grid/use-grid-list-query';
+import { useRenderMark } from '../../../components/use-render-mark';
 import {
   PART_STATUS_LABELS,
   PartStatusLabel,
@@ -91,6 +92,7 @@ export function PartsGrid({ lotId, unit }: { lotId: string; unit: DisplayUnit })
   const navigate = useNavigate();
   const list = useGridListQuery([{ field: 'serial', sort: 'asc' }]);
   const request = useLotParts(lotId, list.query);
+  useRenderMark('lot-parts', request.data !== undefined);
   const columns = useMemo(() => partColumns(unit), [unit]);
   return (
     <AppDataGrid
