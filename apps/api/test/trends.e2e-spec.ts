@@ -20,6 +20,7 @@ describe('trends of part height', () => {
   let admin: Browser;
   let sales: Browser;
   let heights: Record<string, number>;
+  let stored: Record<string, number>;
   let ids: Record<string, string>;
   let lotIds: Record<string, string>;
   let otherInspectorId: string;
@@ -94,13 +95,20 @@ describe('trends of part height', () => {
       lower: bench.spec.nominalMm + bench.spec.bandLowerMm,
       upper: bench.spec.nominalMm + bench.spec.bandUpperMm,
     };
+    // Trends chart the stored height (numeric, 7 decimals of a mm); the answers above carry the
+    // unrounded one. The references below start from what is stored.
+    const results = await bench.em.getConnection().execute<{ serial: string; height: string }[]>(
+      `select p.serial, r.height_mm as height from inspection_result r
+           join inspection i on i.id = r.inspection_id join part p on p.id = i.part_id`,
+    );
+    stored = Object.fromEntries(results.map((r) => [r.serial, Number(r.height)]));
   }, 180_000);
   afterAll(() => t.close());
 
   const serialsA = ['A1', 'A2', 'A3', 'A4', 'A5'];
   const serialsB = ['B1', 'B2', 'B3', 'B4', 'B5'];
   const serialsC = ['C1', 'C2', 'C3'];
-  const of = (serials: string[]) => serials.map((s) => heights[s]!);
+  const of = (serials: string[]) => serials.map((s) => stored[s]!);
 
   it('lists the part numbers with a released revision', async () => {
     const res = await bench.inspector.agent.get('/api/trends').expect(200);
@@ -113,6 +121,8 @@ describe('trends of part height', () => {
     const answer = await trend();
     expect(answer.points.map((p) => p.serial)).toEqual([...serialsA, ...serialsB, ...serialsC]);
     expect(answer.points.map((p) => p.height)).toEqual(of([...serialsA, ...serialsB, ...serialsC]));
+    // The stored heights are the computed ones to 0.1 nm.
+    for (const p of answer.points) expect(Math.abs(p.height - heights[p.serial]!)).toBeLessThanOrEqual(5e-8);
     expect(answer.points.find((p) => p.serial === 'C1')).toMatchObject({
       inspectorName: OTHER_INSPECTOR,
       masterCode: 'MG-1.500-A',
@@ -278,7 +288,9 @@ describe('trends of part height', () => {
     const rows = (await partRows(bench, lot.id)).items;
     const answer = await trend();
     const charted = new Map(answer.points.map((p) => [p.serial, p.height]));
-    expect(rows.map((r) => [r.serial, charted.get(r.serial)])).toEqual(rows.map((r) => [r.serial, r.height]));
+    for (const row of rows) expect(Math.abs(charted.get(row.serial)! - row.height!)).toBeLessThanOrEqual(5e-8);
+    // D1's corrected height, not its first: 0.0002 in (5.08 µm) apart.
+    expect(Math.abs(charted.get('D1')! - first.body.result.height)).toBeGreaterThan(0.005);
     expect(answer.points).toHaveLength(15);
   });
 });

@@ -19,7 +19,12 @@ export type ComputedResult = Omit<InspectionResultView, 'id' | 'reason' | 'maste
   name: 'inspection_result_verdict_check',
   expression: `verdict in ('conforms', 'does-not-conform', 'guard-band') and expanded_uncertainty_mm >= 0`,
 })
-@Index({ properties: ['inspection', 'createdAt'] })
+// The newest result of each inspection, with the height, read from the index alone (trends).
+@Index({
+  name: 'inspection_result_current_height',
+  expression:
+    'create index "inspection_result_current_height" on "inspection_result" ("inspection_id", "created_at", "id") include ("height_mm")',
+})
 export class InspectionResult extends BaseEntity {
   @ManyToOne(() => Inspection)
   inspection!: Inspection;
