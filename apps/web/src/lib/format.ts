@@ -10,3 +10,24 @@ export function formatDate(iso: string): string {
   const date = day ? new Date(Number(day[1]), Number(day[2]) - 1, Number(day[3])) : new Date(iso);
   return Number.isNaN(date.getTime()) ? iso : dateFormat.format(date);
 }
+
+const countFormat = new Intl.NumberFormat(undefined, { maximumFractionDigits: 0 });
+
+/** A count with the reader's digit grouping: 10,000 in en-US, 10.000 in de-DE. */
+export function formatCount(count: number): string {
+  return countFormat.format(count);
+}
+
+/** A grouped count with its noun, singular for one: "1 lot", "10,000 parts". */
+export function countOf(count: number, noun: string, plural = `${noun}s`): string {
+  return `${formatCount(count)} ${count === 1 ? noun : plural}`;
+}
+
+/**
+ * The first `limit` names, then how many more there are ("A, B and 9,990 more"): a big lot or
+ * trend has thousands, and the page's lists or grids hold them all.
+ */
+export function nameFirst(names: readonly string[], limit: number, separator = ', '): string {
+  const more = names.length - limit;
+  return more > 0 ? `${names.slice(0, limit).join(separator)} and ${formatCount(more)} more` : names.join(separator);
+}

@@ -25,10 +25,10 @@ import { IndividualsCharts, SubgroupCharts } from '../../features/trends/compone
 import { trendCsv } from '../../features/trends/components/trend-csv';
 import { TrendFilters } from '../../features/trends/components/trend-filters';
 import { ApiError } from '../../lib/api-client';
+import { countOf } from '../../lib/format';
 
 function lotCount(trend: Trend): string {
-  const lots = new Set(trend.points.map((p) => p.lotNumber)).size;
-  return lots === 1 ? '1 lot' : `${lots} lots`;
+  return countOf(new Set(trend.points.map((p) => p.lotNumber)).size, 'lot');
 }
 
 export function TrendsRoute() {
@@ -101,7 +101,7 @@ export function TrendsRoute() {
         {data && data.points.length > 0 ? (
           <>
             <Typography sx={{ color: 'text.secondary' }}>
-              {`${data.points.length} heights of ${data.partNumber} from ${lotCount(data)}, each part's current result.`}
+              {`${countOf(data.points.length, 'height')} of ${data.partNumber} from ${lotCount(data)}, each part's current result.`}
               {data.spec ? ` Band of revision ${data.spec.revision}.` : ' No released revision, so no band.'}
             </Typography>
             <SectionCard

@@ -1,5 +1,6 @@
 import { PART_STATUSES, type LotDetail } from '@evenset/contracts';
 import { render, screen } from '@testing-library/react';
+import { formatCount } from '../../../lib/format';
 import { InterchangeNotice } from './interchange-notice';
 
 function lotWithOutside(count: number): LotDetail {
@@ -45,7 +46,10 @@ describe('InterchangeNotice', () => {
   it('names the first ten of a big lot and counts the rest', () => {
     render(<InterchangeNotice lot={lotWithOutside(10000)} unit="mm" />);
     const notice = screen.getByRole('alert');
-    expect(notice).toHaveTextContent(/^S-00001, .*, S-00010 and 9,990 more parts would not match PP-6 sets/);
+    // The count is grouped in the reader's locale: 9,990 in en-US.
+    expect(notice).toHaveTextContent(
+      new RegExp(`^S-00001, .*, S-00010 and ${formatCount(9990)} more parts would not match PP-6 sets`),
+    );
     expect(notice).not.toHaveTextContent('S-00011');
   });
 });

@@ -2,6 +2,7 @@ import type { DisplayUnit, LotDetail, WindowSummary } from '@evenset/contracts';
 import { formatLength } from '@evenset/metrology';
 import Alert from '@mui/material/Alert';
 import { Figures } from '../../../components/display/figures';
+import { nameFirst } from '../../../lib/format';
 
 /** The interchange window in words: its limits, or why there is none. */
 export function WindowText({ interchange, unit }: { interchange: WindowSummary; unit: DisplayUnit }) {
@@ -30,11 +31,7 @@ export function InterchangeNotice({ lot, unit }: { lot: LotDetail; unit: Display
       </Alert>
     );
   if (!outsideSerials.length) return null;
-  const more = outsideSerials.length - NAMED_SERIALS;
-  const named =
-    more > 0
-      ? `${outsideSerials.slice(0, NAMED_SERIALS).join(', ')} and ${more.toLocaleString('en')} more parts`
-      : outsideSerials.join(', ');
+  const named = `${nameFirst(outsideSerials, NAMED_SERIALS)}${outsideSerials.length > NAMED_SERIALS ? ' parts' : ''}`;
   return (
     <Alert severity="warning">
       {named} would not match {lot.spec.partNumber} sets sold before: the height is outside the interchange window (

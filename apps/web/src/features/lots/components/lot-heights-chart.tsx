@@ -14,6 +14,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
+import { formatCount } from '../../../lib/format';
 import { granite, monoFontFamily, ochre, slate, status } from '../../../theme/tokens';
 
 interface LotHeightsChartProps {
@@ -58,11 +59,12 @@ export function LotHeightsChart({ spec, window, parts, total, unit }: LotHeights
   const chart = (
     <Box
       role="img"
-      aria-label={`Heights of ${points.length} parts against the band ${format(lower)} to ${format(upper)} ${symbol}`}
+      aria-label={`Heights of ${formatCount(points.length)} parts against the band ${format(lower)} to ${format(upper)} ${symbol}`}
       sx={{ height: 320, fontFamily: monoFontFamily, fontSize: 12 }}
     >
       <ResponsiveContainer width="100%" height="100%">
-        <ScatterChart margin={{ top: 16, right: 24, bottom: 8, left: 24 }}>
+        {/* Room on the right for the last serial, which sits centred on the axis's end. */}
+        <ScatterChart margin={{ top: 16, right: 48, bottom: 8, left: 24 }}>
           <CartesianGrid stroke={granite[200]} />
           <XAxis
             type="number"
@@ -71,6 +73,9 @@ export function LotHeightsChart({ spec, window, parts, total, unit }: LotHeights
             allowDecimals={false}
             tickFormatter={(i: number) => points.find((p) => p.index === i)?.serial ?? ''}
             ticks={points.map((p) => p.index)}
+            // A big lot has hundreds of serials: show as many as fit without running into each other.
+            interval="preserveStartEnd"
+            minTickGap={24}
             stroke={granite[700]}
           />
           <YAxis
@@ -125,8 +130,8 @@ export function LotHeightsChart({ spec, window, parts, total, unit }: LotHeights
     <>
       {chart}
       <Typography variant="body2" sx={{ color: 'text.secondary', mt: 1 }}>
-        Charted: the first {parts.length.toLocaleString('en')} parts by serial of {total.toLocaleString('en')}; the
-        parts list below holds them all.
+        Charted: the first {formatCount(parts.length)} parts by serial of {formatCount(total)}; the parts list below
+        holds them all.
       </Typography>
     </>
   );

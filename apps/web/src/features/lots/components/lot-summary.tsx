@@ -3,7 +3,7 @@ import { formatLength } from '@evenset/metrology';
 import { DetailList } from '../../../components/display/detail-list';
 import { Figures } from '../../../components/display/figures';
 import { PART_STATUS_LABELS } from '../../../components/display/verdict-label';
-import { formatDate } from '../../../lib/format';
+import { formatCount, formatDate } from '../../../lib/format';
 import { WindowText } from './interchange-notice';
 
 /** The lot's spec in brief, its counts and its height spread. */
@@ -13,7 +13,8 @@ export function LotSummary({ lot, unit }: { lot: LotDetail; unit: DisplayUnit })
   const counted = Object.entries(lot.counts)
     .filter(([, count]) => count > 0)
     .map(
-      ([status, count]) => `${count} ${PART_STATUS_LABELS[status as keyof typeof PART_STATUS_LABELS].toLowerCase()}`,
+      ([status, count]) =>
+        `${formatCount(count)} ${PART_STATUS_LABELS[status as keyof typeof PART_STATUS_LABELS].toLowerCase()}`,
     );
   return (
     <DetailList
@@ -31,7 +32,7 @@ export function LotSummary({ lot, unit }: { lot: LotDetail; unit: DisplayUnit })
         { label: 'Ground', value: formatDate(lot.grindDate) },
         {
           label: 'Parts',
-          value: `${lot.partCount} of ${lot.quantity}${counted.length ? ` — ${counted.join(', ')}` : ''}`,
+          value: `${formatCount(lot.partCount)} of ${formatCount(lot.quantity)}${counted.length ? ` — ${counted.join(', ')}` : ''}`,
         },
         { label: 'Interchange window', value: <WindowText interchange={lot.interchange} unit={unit} /> },
         {
@@ -39,7 +40,7 @@ export function LotSummary({ lot, unit }: { lot: LotDetail; unit: DisplayUnit })
           value: heightSpread ? (
             <>
               {length(heightSpread.spread)} ({length(heightSpread.lowest)} to {length(heightSpread.highest)},{' '}
-              {heightSpread.parts} parts)
+              {formatCount(heightSpread.parts)} parts)
             </>
           ) : (
             'No part inspected yet'

@@ -44,7 +44,8 @@ function partColumns(unit: DisplayUnit): GridColDef<PartRow>[] {
   // Six figures columns side by side: narrower than the default so status stays in view at desk width.
   const narrow = (column: GridColDef<PartRow>): GridColDef<PartRow> => ({ ...column, width: 108 });
   return [
-    linkColumn<PartRow>({ field: 'serial', headerName: 'Serial', width: 120 }, (row) => paths.part.getHref(row.id)),
+    // Wide enough for a big lot's serials, e.g. BIG-0001-00001.
+    linkColumn<PartRow>({ field: 'serial', headerName: 'Serial', width: 150 }, (row) => paths.part.getHref(row.id)),
     narrow(lengthColumn<PartRow>('height', 'Height', unit, (row) => row.height, { level: 'fine', ...sortable })),
     narrow(lengthColumn<PartRow>('flatness', 'Flatness', unit, (row) => row.flatness, { level: 'fine', ...sortable })),
     narrow(

@@ -5,6 +5,7 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { DetailList } from '../../../components/display/detail-list';
 import { Figures } from '../../../components/display/figures';
+import { formatCount } from '../../../lib/format';
 
 /** Cp and Cpk against the released band, the number of heights behind them, and a warning when few. */
 export function CapabilityCard({ trend, unit }: { trend: Trend; unit: DisplayUnit }) {
@@ -34,7 +35,7 @@ export function CapabilityCard({ trend, unit }: { trend: Trend; unit: DisplayUni
             Values
           </Typography>
           <Typography variant="h2" component="div">
-            <Figures>{cap.count}</Figures>
+            <Figures>{formatCount(cap.count)}</Figures>
           </Typography>
         </div>
       </Stack>

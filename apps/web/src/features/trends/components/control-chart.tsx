@@ -12,6 +12,7 @@ import {
   YAxis,
   type DotItemDotProps,
 } from 'recharts';
+import { formatCount } from '../../../lib/format';
 import { granite, ochre, slate, status } from '../../../theme/tokens';
 import { ChartFrame } from './chart-frame';
 
@@ -82,12 +83,12 @@ export function ControlChart({ title, fileName, quantity, points, limits, band, 
     <ChartFrame
       title={title}
       fileName={fileName}
-      summary={`${title}: ${data.length} points, centre line ${format(lines.centre)}, control limits ${format(lines.lower)} to ${format(lines.upper)} ${symbol}${signals ? `, ${signals} in run-rule signals` : ''}`}
+      summary={`${title}: ${formatCount(data.length)} points, centre line ${format(lines.centre)}, control limits ${format(lines.lower)} to ${format(lines.upper)} ${symbol}${signals ? `, ${signals} in run-rule signals` : ''}`}
     >
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={data} margin={{ top: 16, right: 96, bottom: 8, left: 24 }}>
           <CartesianGrid stroke={granite[200]} />
-          <XAxis dataKey="label" stroke={granite[700]} interval="preserveStartEnd" minTickGap={8} />
+          <XAxis dataKey="label" stroke={granite[700]} interval="preserveStartEnd" minTickGap={24} />
           <YAxis
             type="number"
             domain={[low - pad, high + pad]}

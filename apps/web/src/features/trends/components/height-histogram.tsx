@@ -10,6 +10,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
+import { formatCount } from '../../../lib/format';
 import { granite, ochre, slate, status } from '../../../theme/tokens';
 import { ChartFrame } from './chart-frame';
 
@@ -42,7 +43,7 @@ export function HeightHistogram({ bins, spec, unit, fileName }: HeightHistogramP
       title="Histogram of heights"
       fileName={fileName}
       height={260}
-      summary={`${total} heights in ${bins.length} bins${band ? ` against the band ${format(band.lower)} to ${format(band.upper)} ${symbol}` : ''}`}
+      summary={`${formatCount(total)} heights in ${bins.length} bins${band ? ` against the band ${format(band.lower)} to ${format(band.upper)} ${symbol}` : ''}`}
     >
       <ResponsiveContainer width="100%" height="100%">
         <AreaChart data={data} margin={{ top: 24, right: 24, bottom: 24, left: 24 }}>
@@ -57,6 +58,7 @@ export function HeightHistogram({ bins, spec, unit, fileName }: HeightHistogramP
           />
           <YAxis
             allowDecimals={false}
+            tickFormatter={formatCount}
             stroke={granite[700]}
             label={{ value: 'Parts', angle: -90, position: 'insideLeft', fill: granite[700] }}
           />

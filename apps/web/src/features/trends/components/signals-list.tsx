@@ -1,4 +1,5 @@
 import type { TrendSignal } from '@evenset/contracts';
+import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import Table from '@mui/material/Table';
 import TableBody from '@mui/material/TableBody';
@@ -6,9 +7,14 @@ import TableCell from '@mui/material/TableCell';
 import TableHead from '@mui/material/TableHead';
 import TableRow from '@mui/material/TableRow';
 import Typography from '@mui/material/Typography';
+import { useState } from 'react';
+import { formatCount } from '../../../lib/format';
 import { SignalMark } from './control-chart';
 
 const CHART_NAMES: Record<TrendSignal['chart'], string> = { xbar: 'X-bar', individuals: 'Individuals' };
+
+// A long history can break the rules hundreds of times: the first few, then all on request.
+const SHOWN_FIRST = 20;
 
 function capitalise(text: string): string {
   return text.charAt(0).toUpperCase() + text.slice(1);
@@ -16,6 +22,8 @@ function capitalise(text: string): string {
 
 /** Each run-rule signal: the chart, the rule in plain words and the points that make the pattern. */
 export function SignalsList({ signals }: { signals: readonly TrendSignal[] }) {
+  const [showAll, setShowAll] = useState(false);
+  const shown = showAll ? signals : signals.slice(0, SHOWN_FIRST);
   return (
     <Stack spacing={1}>
       <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }}>
@@ -38,7 +46,7 @@ export function SignalsList({ signals }: { signals: readonly TrendSignal[] }) {
             </TableRow>
           </TableHead>
           <TableBody>
-            {signals.map((s) => (
+            {shown.map((s) => (
               <TableRow key={`${s.chart}-${s.rule}-${s.side}-${s.index}`}>
                 <TableCell>{CHART_NAMES[s.chart]}</TableCell>
                 <TableCell>{capitalise(s.description)}</TableCell>
@@ -48,6 +56,11 @@ export function SignalsList({ signals }: { signals: readonly TrendSignal[] }) {
           </TableBody>
         </Table>
       )}
+      {shown.length < signals.length ? (
+        <Button onClick={() => setShowAll(true)} sx={{ alignSelf: 'flex-start' }}>
+          Show all {formatCount(signals.length)} signals
+        </Button>
+      ) : null}
     </Stack>
   );
 }

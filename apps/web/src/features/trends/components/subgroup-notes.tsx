@@ -1,6 +1,10 @@
 import type { TrendSubgroupChart } from '@evenset/contracts';
 import Typography from '@mui/material/Typography';
 import Stack from '@mui/material/Stack';
+import { countOf, nameFirst } from '../../../lib/format';
+
+// Hundreds of lots can be trimmed or left out: name a few; the CSV export has every point with its lot.
+const NAMED_SUBGROUPS = 10;
 
 /** Which subgroups the X-bar/R chart uses, which it leaves out or trims, and why. */
 export function SubgroupNotes({ chart }: { chart: TrendSubgroupChart }) {
@@ -10,18 +14,29 @@ export function SubgroupNotes({ chart }: { chart: TrendSubgroupChart }) {
       {chart.note ? <Typography sx={{ color: 'text.primary' }}>{chart.note}</Typography> : null}
       {chart.size ? (
         <Typography variant="body2">
-          {chart.subgroups.length} {noun}s of {chart.size} values each. {chart.sizeRule}
+          {countOf(chart.subgroups.length, noun)} of {chart.size} values each. {chart.sizeRule}
         </Typography>
       ) : null}
       {chart.leftOut.length ? (
         <Typography variant="body2">
-          Left out: {chart.leftOut.map((g) => `${g.label} (${g.count} values, ${g.reason})`).join('; ')}.
+          Left out:{' '}
+          {nameFirst(
+            chart.leftOut.map((g) => `${g.label} (${countOf(g.count, 'value')}, ${g.reason})`),
+            NAMED_SUBGROUPS,
+            '; ',
+          )}
+          .
         </Typography>
       ) : null}
       {chart.trimmed.length ? (
         <Typography variant="body2">
           Charted with their first {chart.size} values only:{' '}
-          {chart.trimmed.map((g) => `${g.label} (${g.count} values)`).join('; ')}.
+          {nameFirst(
+            chart.trimmed.map((g) => `${g.label} (${countOf(g.count, 'value')})`),
+            NAMED_SUBGROUPS,
+            '; ',
+          )}
+          .
         </Typography>
       ) : null}
     </Stack>
