@@ -91,7 +91,8 @@ export function ControlChart({ title, fileName, quantity, points, limits, band, 
           <XAxis dataKey="label" stroke={granite[700]} interval="preserveStartEnd" minTickGap={24} />
           <YAxis
             type="number"
-            domain={[low - pad, high + pad]}
+            // Ranges are never negative: their axis starts at zero at the lowest.
+            domain={[low >= 0 ? Math.max(0, low - pad) : low - pad, high + pad]}
             tickFormatter={format}
             width={90}
             stroke={granite[700]}
