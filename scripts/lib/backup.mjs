@@ -3,6 +3,7 @@
 import { existsSync, mkdirSync, readdirSync, statSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join, resolve } from 'node:path';
+import { databaseName, withDatabase } from './database-url.mjs';
 import { done, info, step, StepError } from './log.mjs';
 import { DATA_DIR, ROOT } from './paths.mjs';
 import { run } from './run.mjs';
@@ -41,16 +42,6 @@ function connectionEnv(url) {
     PGDATABASE: databaseName(url),
     ...(parsed.searchParams.get('sslmode') ? { PGSSLMODE: parsed.searchParams.get('sslmode') } : {}),
   };
-}
-
-function databaseName(url) {
-  return decodeURIComponent(new URL(url).pathname.replace(/^\//, ''));
-}
-
-function withDatabase(url, name) {
-  const next = new URL(url);
-  next.pathname = `/${encodeURIComponent(name)}`;
-  return next.toString();
 }
 
 const quoteIdent = (name) => `"${name.replace(/"/g, '""')}"`;

@@ -7,6 +7,7 @@ import { generateKeyPairSync, randomBytes } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { join } from 'node:path';
+import { withDatabase } from './database-url.mjs';
 import { API_DB_CLI, API_DIST_MAIN, ROOT, WEB_DIST } from './paths.mjs';
 import { LOCAL_DATABASE_URL } from './postgres.mjs';
 
@@ -18,7 +19,7 @@ const signingKey = generateKeyPairSync('ed25519').privateKey.export({ format: 'p
 
 /** The URL of database `name` on the server of DATABASE_URL (the local cluster by default). */
 export function benchDatabaseUrl(name) {
-  return Object.assign(new URL(process.env.DATABASE_URL ?? LOCAL_DATABASE_URL), { pathname: `/${name}` }).toString();
+  return withDatabase(process.env.DATABASE_URL ?? LOCAL_DATABASE_URL, name);
 }
 
 export async function sql(url, text, values) {
@@ -42,7 +43,7 @@ function cli(url, command) {
 /** Drops and makes database `url` again: migrated, with the demo data. */
 export async function freshDemoDatabase(url) {
   const name = new URL(url).pathname.slice(1);
-  const admin = Object.assign(new URL(url), { pathname: '/postgres' }).toString();
+  const admin = withDatabase(url, 'postgres');
   await sql(admin, `drop database if exists "${name}" with (force)`);
   await sql(admin, `create database "${name}"`);
   cli(url, 'migrate');

@@ -1,20 +1,11 @@
 import { createRequire } from 'node:module';
+import { databaseName, withDatabase } from './database-url.mjs';
 import { done, step, StepError } from './log.mjs';
 import { API_DB_CLI, ROOT } from './paths.mjs';
 import { ensureLocalPostgres, LOCAL_DATABASE_URL, LOCAL_TEST_DATABASE_URL } from './postgres.mjs';
 import { run } from './run.mjs';
 
 const requireFromRoot = createRequire(`${ROOT}/package.json`);
-
-function databaseName(url) {
-  return decodeURIComponent(new URL(url).pathname.replace(/^\//, ''));
-}
-
-function withDatabase(url, name) {
-  const next = new URL(url);
-  next.pathname = `/${encodeURIComponent(name)}`;
-  return next.toString();
-}
 
 /** With DATABASE_URL set, use that server: create the databases there if missing, touch no local cluster. */
 async function ensureExternalDatabases(urls) {
