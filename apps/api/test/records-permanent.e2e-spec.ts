@@ -43,6 +43,7 @@ const CHANGEABLE = [
   'master_gauge', // taken out of use
   'material', // expansion coefficient (a released spec keeps its own frozen copy)
   'part', // serial list of a lot
+  'part_current', // derived from inspection and inspection_result by a trigger, like an index
   'part_spec', // draft edits, release, supersession
   'password_reset_token', // marked used
   'schema_migration', // the migrator's bookkeeping

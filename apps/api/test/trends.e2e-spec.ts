@@ -1,4 +1,4 @@
-import type { Trend, TrendPartNumber } from '@evenset/contracts';
+import { trendPointList, type Trend, type TrendPartNumber } from '@evenset/contracts';
 import { capability, individuals, runRules, xbarR } from '@evenset/metrology';
 import { ensureUser } from '../src/database/factories/user.factory';
 import { type Bench, givenBench, givenLot, partRows, post, startRun, topReadings } from './setup/bench';
@@ -119,11 +119,12 @@ describe('trends of part height', () => {
 
   it('charts every measured part in lot order, with X-bar/R limits equal to xbarR on the same heights', async () => {
     const answer = await trend();
-    expect(answer.points.map((p) => p.serial)).toEqual([...serialsA, ...serialsB, ...serialsC]);
-    expect(answer.points.map((p) => p.height)).toEqual(of([...serialsA, ...serialsB, ...serialsC]));
+    const points = trendPointList(answer);
+    expect(points.map((p) => p.serial)).toEqual([...serialsA, ...serialsB, ...serialsC]);
+    expect(answer.points.height).toEqual(of([...serialsA, ...serialsB, ...serialsC]));
     // The stored heights are the computed ones to 0.1 nm.
-    for (const p of answer.points) expect(Math.abs(p.height - heights[p.serial]!)).toBeLessThanOrEqual(5e-8);
-    expect(answer.points.find((p) => p.serial === 'C1')).toMatchObject({
+    for (const p of points) expect(Math.abs(p.height - heights[p.serial]!)).toBeLessThanOrEqual(5e-8);
+    expect(points.find((p) => p.serial === 'C1')).toMatchObject({
       inspectorName: OTHER_INSPECTOR,
       masterCode: 'MG-1.500-A',
       lotNumber: 'L-TR-3',
@@ -206,12 +207,15 @@ describe('trends of part height', () => {
     const reference = xbarR(groups.map((g) => of(g.serials)));
     expect(answer.subgroups.xbar).toEqual(reference.xbar);
     expect(answer.subgroups.range).toEqual(reference.range);
-    expect(answer.points.find((p) => p.serial === 'A1')!.setNumber).toBe(groups[0]!.label);
+    expect(trendPointList(answer).find((p) => p.serial === 'A1')!.setNumber).toBe(groups[0]!.label);
   });
 
   it('narrows the data by lot, inspector, master and inspection date', async () => {
-    const serials = (a: Trend) => a.points.map((p) => p.serial);
-    expect(serials(await trend({ lotIds: lotIds['L-TR-2']! }))).toEqual(serialsB);
+    const serials = (a: Trend) => a.points.serial;
+    const lotB = await trend({ lotIds: lotIds['L-TR-2']! });
+    expect(serials(lotB)).toEqual(serialsB);
+    // Points name their lot by its place in the (unfiltered) choices.
+    expect(new Set(trendPointList(lotB).map((p) => p.lotNumber))).toEqual(new Set(['L-TR-2']));
     expect(serials(await trend({ lotIds: `${lotIds['L-TR-1']},${lotIds['L-TR-3']}` }))).toEqual([
       ...serialsA,
       ...serialsC,
@@ -225,7 +229,8 @@ describe('trends of part height', () => {
     const tomorrow = new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
     expect(serials(await trend({ from: today, to: today }))).toHaveLength(13);
     const none = await trend({ from: tomorrow });
-    expect(none.points).toEqual([]);
+    expect(none.points.serial).toEqual([]);
+    expect(none.points.height).toEqual([]);
     expect(none.subgroups.xbar).toBeNull();
     expect(none.individuals).toBeNull();
     expect(none.capability).toBeNull();
@@ -264,8 +269,8 @@ describe('trends of part height', () => {
   });
 
   it('lets an admin and an inspector read trends, and not sales', async () => {
-    expect((await trend({}, admin)).points).toHaveLength(13);
-    expect((await trend({}, bench.inspector)).points).toHaveLength(13);
+    expect((await trend({}, admin)).points.serial).toHaveLength(13);
+    expect((await trend({}, bench.inspector)).points.serial).toHaveLength(13);
     await sales.agent.get('/api/trends/RB-40').expect(403);
   });
 
@@ -287,10 +292,10 @@ describe('trends of part height', () => {
     // The trend reads the records in SQL; the lot's part list derives the same rule in the service.
     const rows = (await partRows(bench, lot.id)).items;
     const answer = await trend();
-    const charted = new Map(answer.points.map((p) => [p.serial, p.height]));
+    const charted = new Map(trendPointList(answer).map((p) => [p.serial, p.height]));
     for (const row of rows) expect(Math.abs(charted.get(row.serial)! - row.height!)).toBeLessThanOrEqual(5e-8);
     // D1's corrected height, not its first: 0.0002 in (5.08 µm) apart.
     expect(Math.abs(charted.get('D1')! - first.body.result.height)).toBeGreaterThan(0.005);
-    expect(answer.points).toHaveLength(15);
+    expect(answer.points.serial).toHaveLength(15);
   });
 });

@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
+import { trendPointList, type Trend, type TrendLimits } from '../../../packages/contracts/src';
 import { formatLength, individuals, xbarR, type LengthUnit } from '../../../packages/metrology/src';
 import { baseUrl, openBrowser, OpenBrowser, screenshot, signIn } from './setup/browser';
 import { choose, DEMO_PASSWORD, menuClosed } from './setup/bench';
@@ -7,25 +8,6 @@ import { apiGet } from './setup/lot-review';
 
 // The demo's RB-40 lots (apps/api/src/database/seeders/demo-lots.ts).
 const RB40_LOTS = ['L-2025-118', 'L-2026-041', 'L-2026-047', 'L-2026-052'];
-
-interface Limits {
-  lower: number;
-  centre: number;
-  upper: number;
-}
-
-/** The parts of GET /api/trends/:partNumber this test reads (lengths in mm). */
-interface TrendAnswer {
-  points: { serial: string; lotNumber: string; height: number }[];
-  subgroups: {
-    size: number | null;
-    subgroups: { label: string; serials: string[] }[];
-    xbar: Limits | null;
-    range: Limits | null;
-  };
-  individuals: { individuals: Limits; movingRange: Limits } | null;
-  capability: { count: number } | null;
-}
 
 jest.setTimeout(120_000);
 
@@ -51,19 +33,20 @@ describe('trends (browser)', () => {
     await page.getByRole('figure', { name: 'X-bar chart' }).locator('svg.recharts-surface').waitFor();
 
     const { user } = await apiGet<{ user: { displayUnit: LengthUnit } }>(page, '/auth/me');
-    const trend = await apiGet<TrendAnswer>(page, '/trends/RB-40?subgroup=lot');
-    for (const lot of RB40_LOTS) expect(trend.points.map((p) => p.lotNumber)).toContain(lot);
+    const trend = await apiGet<Trend>(page, '/trends/RB-40?subgroup=lot');
+    const points = trendPointList(trend);
+    for (const lot of RB40_LOTS) expect(points.map((p) => p.lotNumber)).toContain(lot);
 
     // The API's limits are xbarR/individuals of @evenset/metrology on the heights it lists
     // (apps/api/test/trends.e2e-spec.ts checks the same on a fixture of its own).
-    const height = new Map(trend.points.map((p) => [p.serial, p.height]));
+    const height = new Map(points.map((p) => [p.serial, p.height]));
     const reference = xbarR(trend.subgroups.subgroups.map((g) => g.serials.map((s) => height.get(s)!)));
     expect(trend.subgroups.xbar).toEqual(reference.xbar);
     expect(trend.subgroups.range).toEqual(reference.range);
-    const single = individuals(trend.points.map((p) => p.height));
+    const single = individuals(trend.points.height);
     expect(trend.individuals?.individuals).toEqual(single.individuals);
 
-    const shown = (limits: Limits) =>
+    const shown = (limits: TrendLimits) =>
       [limits.lower, limits.centre, limits.upper].map((mm) =>
         formatLength(mm, user.displayUnit, { level: 'fine', withSymbol: false }),
       );
@@ -91,7 +74,7 @@ describe('trends (browser)', () => {
       .trim()
       .split('\r\n');
     expect(rows[0]).toMatch(/^Serial,Lot,Set,Inspector,Master,Inspected at,Height \(/);
-    expect(rows).toHaveLength(trend.points.length + 1);
+    expect(rows).toHaveLength(points.length + 1);
     const [svg] = await Promise.all([
       page.waitForEvent('download'),
       xbarFigure.getByRole('button', { name: 'Save SVG' }).click(),
@@ -123,12 +106,12 @@ describe('trends (browser)', () => {
     await page.keyboard.press('Escape');
     await menuClosed(page);
     await page.getByText(/needs at least 2 lots/).waitFor();
-    const trend = await apiGet<TrendAnswer>(page, '/trends/RB-40');
+    const trend = await apiGet<Trend>(page, '/trends/RB-40');
     const lot = await apiGet<{ items: { id: string; lotNumber: string }[] }>(page, '/lots?q=L-2026-052');
-    const oneLot = await apiGet<TrendAnswer>(page, `/trends/RB-40?lotIds=${lot.items[0]!.id}`);
-    expect(oneLot.points.every((p) => p.lotNumber === 'L-2026-052')).toBe(true);
-    expect(oneLot.points.length).toBeLessThan(trend.points.length);
-    await page.getByText(`${oneLot.points.length} heights of RB-40 from 1 lot,`).waitFor();
+    const oneLot = await apiGet<Trend>(page, `/trends/RB-40?lotIds=${lot.items[0]!.id}`);
+    expect(trendPointList(oneLot).every((p) => p.lotNumber === 'L-2026-052')).toBe(true);
+    expect(oneLot.points.serial.length).toBeLessThan(trend.points.serial.length);
+    await page.getByText(`${oneLot.points.serial.length} heights of RB-40 from 1 lot,`).waitFor();
     await screenshot(page, 'trends-rb40-one-lot');
   });
 });

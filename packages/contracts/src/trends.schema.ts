@@ -50,21 +50,42 @@ export const trendPartNumberSchema = z.object({
 export type TrendPartNumber = z.infer<typeof trendPartNumberSchema>;
 
 /**
- * One part's current height: the newest result of its current (not superseded) inspection. Ids are left out on purpose: a part number can hold 20,000 points, and the
- * filters' ids travel once in `choices`.
+ * Each charted part's current height (the newest result of its current, not superseded, inspection)
+ * as columns: entry i of every column is point i. A part number can hold 20,000 points, so a point
+ * names its lot, inspector and master by their place in `choices` rather than repeating names and
+ * ids; `trendPointAt` puts one back together.
  */
-export const trendPointSchema = z.object({
-  serial: z.string(),
-  lotNumber: z.string(),
-  /** The sold set holding the part, if any. */
-  setNumber: z.string().nullable(),
-  inspectorName: z.string(),
-  masterCode: z.string(),
-  inspectedAt: z.string(),
+export const trendPointsSchema = z
+  .object({
+    serial: z.array(z.string()),
+    /** Place of the point's lot in `choices.lots`. */
+    lot: z.array(z.number().int()),
+    /** The sold set holding the part, if any. */
+    setNumber: z.array(z.string().nullable()),
+    /** Place of the inspector in `choices.inspectors`. */
+    inspector: z.array(z.number().int()),
+    /** Place of the master gauge in `choices.masters`. */
+    master: z.array(z.number().int()),
+    inspectedAt: z.array(z.string()),
+    /** mm */
+    height: z.array(z.number()),
+  })
+  .refine((p) => Object.values(p).every((column) => column.length === p.serial.length), {
+    message: 'Every column of the points has one entry per point.',
+  });
+export type TrendPoints = z.infer<typeof trendPointsSchema>;
+
+/** One point with its names, for tables, files and tests. */
+export interface TrendPoint {
+  serial: string;
+  lotNumber: string;
+  setNumber: string | null;
+  inspectorName: string;
+  masterCode: string;
+  inspectedAt: string;
   /** mm */
-  height: z.number(),
-});
-export type TrendPoint = z.infer<typeof trendPointSchema>;
+  height: number;
+}
 
 export const trendLimitsSchema = z.object({ centre: z.number(), lower: z.number(), upper: z.number() });
 export type TrendLimits = z.infer<typeof trendLimitsSchema>;
@@ -157,7 +178,7 @@ export const trendSchema = z.object({
     })
     .nullable(),
   /** Points in chart order: lots by grind date, then parts by inspection time. */
-  points: z.array(trendPointSchema),
+  points: trendPointsSchema,
   subgroups: trendSubgroupChartSchema,
   individuals: trendIndividualsSchema.nullable(),
   signals: z.array(trendSignalSchema),
@@ -173,3 +194,21 @@ export const trendSchema = z.object({
   }),
 });
 export type Trend = z.infer<typeof trendSchema>;
+
+/** Point `i` of a trend, its lot, inspector and master named from the trend's choices. */
+export function trendPointAt({ points, choices }: Pick<Trend, 'points' | 'choices'>, i: number): TrendPoint {
+  return {
+    serial: points.serial[i]!,
+    lotNumber: choices.lots[points.lot[i]!]!.lotNumber,
+    setNumber: points.setNumber[i]!,
+    inspectorName: choices.inspectors[points.inspector[i]!]!.name,
+    masterCode: choices.masters[points.master[i]!]!.code,
+    inspectedAt: points.inspectedAt[i]!,
+    height: points.height[i]!,
+  };
+}
+
+/** Every point of a trend, in chart order, as `trendPointAt` gives them. */
+export function trendPointList(trend: Pick<Trend, 'points' | 'choices'>): TrendPoint[] {
+  return trend.points.serial.map((_, i) => trendPointAt(trend, i));
+}

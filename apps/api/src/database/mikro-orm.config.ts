@@ -12,8 +12,9 @@ export function ormConfig(clientUrl: string) {
     preferTs: __filename.endsWith('.ts'),
     entities: ENTITIES,
     extensions: [Migrator, SeedManager],
-    // Sessions belong to connect-pg-simple; its table is made by a hand-written migration.
-    schemaGenerator: { skipTables: ['session'] },
+    // Sessions belong to connect-pg-simple, and part_current is derived data kept by a trigger: both
+    // tables are made by hand-written migrations and are no entities.
+    schemaGenerator: { skipTables: ['session', 'part_current'] },
     migrations: {
       tableName: 'schema_migration',
       path: join(__dirname, 'migrations'),

@@ -1,17 +1,12 @@
 import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable } from '@nestjs/common';
 import { z } from 'zod';
-import {
-  trendQuerySchema,
-  type Trend,
-  type TrendCapability,
-  type TrendPartNumber,
-  type TrendPoint,
-} from '@evenset/contracts';
+import { trendQuerySchema, type Trend, type TrendCapability, type TrendPartNumber } from '@evenset/contracts';
 import { capability } from '@evenset/metrology';
 import { NotFoundException } from '../common/errors/domain.exception';
 import { Spec } from '../specs/spec.entity';
-import { trendRows, type TrendRow } from './trend-rows';
+import { choicesOf, pointsOf } from './trend-points';
+import { trendData, type TrendRow } from './trend-rows';
 import { histogram, individualsChart, signalsOf, subgroupChart, type Group } from './trend-charts';
 
 type TrendFilters = z.output<typeof trendQuerySchema>;
@@ -40,21 +35,15 @@ export class TrendsService {
     if (!specs.length) throw new NotFoundException(`Part number ${partNumber}`);
     const released = specs.find((s) => s.status === 'released') ?? null;
 
-    const all = await trendRows(this.em, partNumber);
-    const rows = all.filter((r) => matches(r, filters));
-    const points: TrendPoint[] = rows.map((r) => ({
-      serial: r.serial,
-      lotNumber: r.lotNumber,
-      setNumber: r.setNumber,
-      inspectorName: r.inspectorName,
-      masterCode: r.masterCode,
-      inspectedAt: r.inspectedAt,
-      height: r.height,
-    }));
-    const heights = points.map((p) => p.height);
-    const serials = points.map((p) => p.serial);
+    const data = await trendData(this.em, partNumber);
+    const { choices, placeOf } = choicesOf(data);
+    const rows = filtered(data.rows, filters);
+    const points = pointsOf(rows, placeOf);
+    const heights = points.height;
+    const serials = points.serial;
 
-    const subgroups = subgroupChart(filters.subgroup, groupsOf(rows, filters.subgroup));
+    const lotNumbers = new Map(data.lots.map((l) => [l.id, l.lotNumber]));
+    const subgroups = subgroupChart(filters.subgroup, groupsOf(rows, filters.subgroup, lotNumbers));
     const chart = individualsChart(heights);
     const signals = [
       ...(subgroups.xbar
@@ -89,29 +78,30 @@ export class TrendsService {
       capability: cap,
       capabilityNote: note,
       histogram: histogram(heights),
-      choices: choicesOf(all),
+      choices,
     };
   }
 }
 
-function matches(row: TrendRow, f: TrendFilters): boolean {
-  const day = row.inspectedAt.slice(0, 10);
-  if (f.from && day < f.from) return false;
-  if (f.to && day > f.to) return false;
-  if (f.lotIds?.length && !f.lotIds.includes(row.lotId)) return false;
-  if (f.masterId && row.masterId !== f.masterId) return false;
-  if (f.inspector) {
-    const who = f.inspector.toLowerCase();
-    if (row.inspectorId !== f.inspector && row.inspectorName.toLowerCase() !== who) return false;
-  }
-  return true;
+/** The rows the filters keep (all of them, as they are, when no filter is set). */
+function filtered(rows: TrendRow[], f: TrendFilters): TrendRow[] {
+  const inspector = f.inspector?.toLowerCase();
+  if (!f.from && !f.to && !f.lotIds?.length && !f.masterId && !inspector) return rows;
+  return rows.filter((row) => {
+    const day = row.inspectedAt.slice(0, 10);
+    if (f.from && day < f.from) return false;
+    if (f.to && day > f.to) return false;
+    if (f.lotIds?.length && !f.lotIds.includes(row.lotId)) return false;
+    if (f.masterId && row.masterId !== f.masterId) return false;
+    return !inspector || row.inspectorId === f.inspector || row.inspectorName.toLowerCase() === inspector;
+  });
 }
 
 /** Subgroups by lot (in chart order) or by sold set (in order of sale); parts in no set are not grouped. */
-function groupsOf(rows: readonly TrendRow[], basis: 'lot' | 'set'): Group[] {
+function groupsOf(rows: readonly TrendRow[], basis: 'lot' | 'set', lotNumbers: Map<string, string>): Group[] {
   const groups = new Map<string, Group & { order: number }>();
   for (const row of rows) {
-    const label = basis === 'lot' ? row.lotNumber : row.setNumber;
+    const label = basis === 'lot' ? lotNumbers.get(row.lotId)! : row.setNumber;
     if (label === null) continue;
     const order = basis === 'lot' ? groups.size : (row.setCreatedAt ?? 0);
     const group = groups.get(label) ?? { label, serials: [], heights: [], order };
@@ -155,21 +145,5 @@ function capabilityOf(
         : null,
     },
     note: null,
-  };
-}
-
-function choicesOf(rows: readonly TrendRow[]): Trend['choices'] {
-  const lots = new Map<string, string>();
-  const inspectors = new Map<string, { id: string | null; name: string }>();
-  const masters = new Map<string, string>();
-  for (const r of rows) {
-    lots.set(r.lotId, r.lotNumber);
-    inspectors.set(r.inspectorId ?? r.inspectorName, { id: r.inspectorId, name: r.inspectorName });
-    masters.set(r.masterId, r.masterCode);
-  }
-  return {
-    lots: [...lots].map(([id, lotNumber]) => ({ id, lotNumber })),
-    inspectors: [...inspectors.values()].sort((a, b) => a.name.localeCompare(b.name)),
-    masters: [...masters].map(([id, code]) => ({ id, code })).sort((a, b) => a.code.localeCompare(b.code)),
   };
 }

@@ -28,7 +28,7 @@ import { ApiError } from '../../lib/api-client';
 import { countOf } from '../../lib/format';
 
 function lotCount(trend: Trend): string {
-  return countOf(new Set(trend.points.map((p) => p.lotNumber)).size, 'lot');
+  return countOf(new Set(trend.points.lot).size, 'lot');
 }
 
 export function TrendsRoute() {
@@ -56,12 +56,9 @@ export function TrendsRoute() {
             <Button
               variant="outlined"
               startIcon={<FileDownloadOutlined />}
-              disabled={!data.points.length}
+              disabled={!data.points.serial.length}
               onClick={() =>
-                download(
-                  new Blob([trendCsv(data.points, displayUnit)], { type: 'text/csv' }),
-                  `trend-${data.partNumber}.csv`,
-                )
+                download(new Blob([trendCsv(data, displayUnit)], { type: 'text/csv' }), `trend-${data.partNumber}.csv`)
               }
             >
               Export data (CSV)
@@ -93,15 +90,15 @@ export function TrendsRoute() {
         ) : null}
         {refused ? <Typography color="error">{refused.message}</Typography> : null}
         {partNumber && !data && !trend.error ? <PageLoading /> : null}
-        {data && data.points.length === 0 ? (
+        {data && data.points.serial.length === 0 ? (
           <Typography>
             No measured part of {data.partNumber} matches these filters — widen them or clear them.
           </Typography>
         ) : null}
-        {data && data.points.length > 0 ? (
+        {data && data.points.serial.length > 0 ? (
           <>
             <Typography sx={{ color: 'text.secondary' }}>
-              {`${countOf(data.points.length, 'height')} of ${data.partNumber} from ${lotCount(data)}, each part's current result.`}
+              {`${countOf(data.points.serial.length, 'height')} of ${data.partNumber} from ${lotCount(data)}, each part's current result.`}
               {data.spec ? ` Band of revision ${data.spec.revision}.` : ' No released revision, so no band.'}
             </Typography>
             <SectionCard

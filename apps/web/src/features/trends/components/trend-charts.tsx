@@ -52,7 +52,11 @@ export function IndividualsCharts({ trend, unit }: { trend: Trend; unit: Display
         title="Individuals chart"
         fileName={`${name}-individuals`}
         quantity="Height"
-        points={trend.points.map((p, i) => ({ label: p.serial, value: p.height, signal: marked.has(i) }))}
+        points={trend.points.serial.map((serial, i) => ({
+          label: serial,
+          value: trend.points.height[i]!,
+          signal: marked.has(i),
+        }))}
         limits={chart.individuals}
         band={trend.spec}
         unit={unit}
@@ -61,7 +65,7 @@ export function IndividualsCharts({ trend, unit }: { trend: Trend; unit: Display
         title="Moving range chart"
         fileName={`${name}-moving-range`}
         quantity="Moving range"
-        points={chart.movingRanges.map((value, i) => ({ label: trend.points[i + 1]!.serial, value, signal: false }))}
+        points={chart.movingRanges.map((value, i) => ({ label: trend.points.serial[i + 1]!, value, signal: false }))}
         limits={chart.movingRange}
         unit={unit}
       />

@@ -1,4 +1,4 @@
-import type { DisplayUnit, TrendPoint } from '@evenset/contracts';
+import { trendPointList, type DisplayUnit, type Trend } from '@evenset/contracts';
 import { displayResolution, formatFixed, fromMillimetres } from '@evenset/metrology';
 
 /** One CSV field (RFC 4180): quoted when it holds a comma, a quote or a line break; quotes doubled. */
@@ -7,10 +7,10 @@ export function csvField(value: string): string {
 }
 
 /** The trend's points as CSV, heights in the person's unit at the trade's fine resolution. */
-export function trendCsv(points: readonly TrendPoint[], unit: DisplayUnit): string {
+export function trendCsv(trend: Pick<Trend, 'points' | 'choices'>, unit: DisplayUnit): string {
   const { decimals, symbol } = displayResolution(unit, 'fine');
   const header = ['Serial', 'Lot', 'Set', 'Inspector', 'Master', 'Inspected at', `Height (${symbol})`];
-  const rows = points.map((p) => [
+  const rows = trendPointList(trend).map((p) => [
     p.serial,
     p.lotNumber,
     p.setNumber ?? '',
