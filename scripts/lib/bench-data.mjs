@@ -1,7 +1,7 @@
 // The bench data and server shared by the benchmarks that go through the built app (scripts/bench-api.mjs,
 // scripts/bench-web.mjs): a part number with 500 lots and 20,000 inspected parts in its own database
 // (evenset_bench, or BENCH_DATABASE_URL), made once: migrated, demo data, then 500 lots copied in SQL
-// from one inspected demo part. Reused while it holds them; drop it to start over. The server: bench-server.mjs.
+// from one inspected demo part. Reused (and migrated) while it holds them; drop it to start over. The server: bench-server.mjs.
 import { createRequire } from 'node:module';
 import { join } from 'node:path';
 import * as server from './bench-server.mjs';
@@ -111,7 +111,10 @@ export async function ensureBenchData() {
   const [row] = await sql(BENCH_URL, `select count(*)::int as n from part where serial like 'BL-%'`).catch(() => [
     { n: 0 },
   ]);
-  if (row.n === LOTS * PARTS_PER_LOT) return false;
+  if (row.n === LOTS * PARTS_PER_LOT) {
+    server.migrate(BENCH_URL);
+    return false;
+  }
   await server.freshDemoDatabase(BENCH_URL);
   await copyInspectedLots(await template(), 'BL', LOTS, PARTS_PER_LOT);
   return true;

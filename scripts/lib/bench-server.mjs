@@ -50,10 +50,16 @@ export async function freshDemoDatabase(url) {
   cli(url, 'seed');
 }
 
+/** Applies pending migrations to database `url` (a reused bench database must match the code it measures). */
+export const migrate = (url) => cli(url, 'migrate');
+
+/** Node flags for the API under measurement, e.g. BENCH_NODE_ARGS="--cpu-prof" to see where its time goes. */
+const nodeArgs = process.env.BENCH_NODE_ARGS?.split(/\s+/).filter(Boolean) ?? [];
+
 /** Starts dist/main.js on a free loopback port over database `url`; resolves once /api/health answers. */
 export async function startApi(url) {
   const port = 45000 + Math.floor(Math.random() * 1000);
-  const child = spawn(process.execPath, [API_DIST_MAIN], {
+  const child = spawn(process.execPath, [...nodeArgs, API_DIST_MAIN], {
     env: {
       ...process.env,
       NODE_ENV: 'production',
