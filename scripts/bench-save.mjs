@@ -94,8 +94,12 @@ function insert(table, rows) {
   return { text: `insert into ${table} (${columns.join(', ')}) values ${tuples.join(', ')}`, values };
 }
 
-/** One pg client saving `amount` copies of `rows` one after another; answers BEGIN-to-COMMIT times (ms). */
-async function bareClient(rows, amount) {
+/**
+ * One pg client saving copies of `rows` one after another, each for the next of `partIds` (one
+ * part a save, as the inspectors do: saves of one part wait for each other); answers
+ * BEGIN-to-COMMIT times (ms).
+ */
+async function bareClient(rows, partIds, amount) {
   const client = new Client({ connectionString: url });
   await client.connect();
   const times = [];
@@ -104,7 +108,7 @@ async function bareClient(rows, amount) {
       const id = randomUUID();
       const started = performance.now();
       await client.query('begin');
-      await client.query(insert('inspection', [{ ...rows.inspection, id }]));
+      await client.query(insert('inspection', [{ ...rows.inspection, id, part_id: partIds.shift() }]));
       await client.query(
         insert(
           'inspection_reading',
@@ -126,15 +130,19 @@ const { base, child } = await startApi(url);
 try {
   const engineer = await signIn(base, 'engineer@kestrel.example');
   const perInspector = WARM_UP + SAVES;
+  // Each save is of a part of its own: the first half for the product, the second for the floor.
+  const saves = INSPECTORS * perInspector;
   const { lot, stations } = await givenGridLot(engineer, {
     partNumber: 'SAVE-25',
     lotNumber: 'L-SAVE',
-    parts: INSPECTORS * perInspector,
+    parts: 2 * saves,
     prefix: 'SV-',
   });
   const parts = [];
-  for (let page = 0; parts.length < INSPECTORS * perInspector; page += 1)
+  for (let page = 0; parts.length < 2 * saves; page += 1)
     parts.push(...(await engineer.call('GET', `/api/lots/${lot.id}/parts?pageSize=500&page=${page}`)).items);
+  const floorParts = parts.slice(saves).map((p) => p.id);
+  const floorPartsOf = (i) => floorParts.slice(i * perInspector, (i + 1) * perInspector);
   const inspectors = [];
   for (let i = 0; i < INSPECTORS; i += 1) {
     const session = await signIn(base, ACCOUNTS[i % ACCOUNTS.length]);
@@ -148,14 +156,14 @@ try {
   const product = (await all(SAVES)).flat();
   const productSeconds = (performance.now() - started) / 1000;
   const [{ n: stored }] = await sql(url, 'select count(*)::int as n from inspection where spec_id = $1', [lot.spec.id]);
-  if (stored !== INSPECTORS * perInspector)
-    throw new Error(`${stored} inspections stored, expected ${INSPECTORS * perInspector}.`);
+  if (stored !== saves) throw new Error(`${stored} inspections stored, expected ${saves}.`);
 
   const [{ id: sample }] = await sql(url, 'select id from inspection where spec_id = $1 limit 1', [lot.spec.id]);
   const rows = await savedRows(sample);
-  await Promise.all(Array.from({ length: INSPECTORS }, () => bareClient(rows, WARM_UP)));
+  const floorClients = Array.from({ length: INSPECTORS }, (_, i) => floorPartsOf(i));
+  await Promise.all(floorClients.map((partIds) => bareClient(rows, partIds, WARM_UP)));
   const floorStarted = performance.now();
-  const floor = (await Promise.all(Array.from({ length: INSPECTORS }, () => bareClient(rows, SAVES)))).flat();
+  const floor = (await Promise.all(floorClients.map((partIds) => bareClient(rows, partIds, SAVES)))).flat();
   const floorSeconds = (performance.now() - floorStarted) / 1000;
 
   console.log(

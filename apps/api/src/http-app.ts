@@ -2,7 +2,6 @@ import { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
-import connectPgSimple from 'connect-pg-simple';
 import session from 'express-session';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
@@ -15,6 +14,7 @@ import { randomBytes } from 'node:crypto';
 import { AppModule } from './app.module';
 import { AppConfig } from './config/app-config.service';
 import { SessionPool } from './session/session-pool';
+import { SessionStore } from './session/session-store';
 
 const SESSION_MAX_AGE_MS = 12 * 60 * 60 * 1000; // one shift and some
 
@@ -45,17 +45,11 @@ export async function createHttpApp(): Promise<INestApplication> {
   app.useBodyParser('json', { limit: '2mb' });
 
   const { pool } = app.get(SessionPool);
-  const PgStore = connectPgSimple(session);
   const cookieSecure = config.get('COOKIE_SECURE');
   app.use(
     session({
       name: 'evenset.sid',
-      store: new PgStore({
-        pool,
-        tableName: 'session',
-        createTableIfMissing: false,
-        pruneSessionInterval: 15 * 60,
-      }),
+      store: new SessionStore(pool),
       secret: config.get('SESSION_SECRET') ?? randomBytes(32).toString('hex'),
       resave: false,
       saveUninitialized: false,

@@ -177,6 +177,10 @@ describe('Bench runs and inspections', () => {
     ]);
     const row = (await partRows(bench, lot.id)).items[0]!;
     expect(row.height).toBeCloseTo(second.result.height, 9);
+    // The save's answer is built from the rows as stored, without reading them back: it must be
+    // what a later read of the same inspection shows.
+    expect(detail.inspections[0]).toEqual(second);
+    expect(detail.inspections[1]).toEqual({ ...first, supersededById: second.id });
   });
 
   it('has no route that changes or deletes an inspection, and the database refuses it', async () => {

@@ -10,6 +10,23 @@ const optionalLength = () => ({ type: new DecimalType('number'), ...LENGTH_COLUM
 /** The computed part of a result: the columns the lists sort on, and the whole answer as computed. */
 export type ComputedResult = Omit<InspectionResultView, 'id' | 'reason' | 'masterCalibrationId' | 'createdAt'>;
 
+/** A result as the API shows it: the computed answer with its identity (from an entity or a stored row). */
+export function resultView(r: {
+  id: string;
+  reason: string;
+  masterCalibrationId: string;
+  computed: ComputedResult;
+  createdAt: Date;
+}): InspectionResultView {
+  return {
+    ...r.computed,
+    id: r.id,
+    reason: r.reason,
+    masterCalibrationId: r.masterCalibrationId,
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
 /**
  * What the server computed from an inspection's readings. Append-only: a recomputation (e.g.
  * after a master correction) adds a result; the newest is the one in force.
@@ -59,12 +76,12 @@ export class InspectionResult extends BaseEntity {
   computed!: ComputedResult;
 
   toView(): InspectionResultView {
-    return {
-      ...this.computed,
+    return resultView({
       id: this.id,
       reason: this.reason,
       masterCalibrationId: this.masterCalibration.id,
-      createdAt: this.createdAt.toISOString(),
-    };
+      computed: this.computed,
+      createdAt: this.createdAt,
+    });
   }
 }

@@ -15,7 +15,7 @@ import { AuditService, type AuditRecord } from '../audit/audit.service';
 import { NotFoundException, ValidationFailedException } from '../common/errors/domain.exception';
 import { gaugeStatus, todayIso } from '../common/gauges/gauge-status';
 import { toMm } from '../common/units/lengths';
-import { insertRows } from '../database/bulk-insert';
+import { insertAll } from '../database/bulk-insert';
 import { Instrument } from '../instruments/instrument.entity';
 import { Lot } from '../lots/lot.entity';
 import { Part } from '../lots/part.entity';
@@ -25,7 +25,7 @@ import { DEFAULT_MASTER_DRIFT_LIMIT_MM } from '../specs/spec.entity';
 import { BenchRun } from './bench-run.entity';
 import { computeResult } from './compute-result';
 import { InspectionReading } from './inspection-reading.entity';
-import { InspectionResult } from './inspection-result.entity';
+import { InspectionResult, resultView, type ComputedResult } from './inspection-result.entity';
 import { Inspection } from './inspection.entity';
 import {
   GaugeNotUsableException,
@@ -149,6 +149,95 @@ function resultRow(
   };
 }
 
+/** What an inspection's view shows besides its readings, results and correction. */
+type InspectionFacts = Omit<InspectionView, 'readings' | 'result' | 'results' | 'supersededById'>;
+
+/** An inspection's facts from its entity, its part and run loaded. */
+function entityFacts(i: Inspection): InspectionFacts {
+  return {
+    id: i.id,
+    partId: i.part.id,
+    serial: i.part.serial,
+    runId: i.run.id,
+    specId: i.spec.id,
+    masterCalibrationId: i.masterCalibration.id,
+    instrumentId: i.instrumentId,
+    instrumentResolution: i.instrumentResolutionMm,
+    masterTemperature: i.masterTemperatureC,
+    partTemperature: i.partTemperatureC,
+    partExpansionPerK: i.partExpansionPerK,
+    masterExpansionPerK: i.masterExpansionPerK,
+    inspector: i.inspectorName,
+    runFlagged: i.run.flagged(),
+    supersedesId: i.supersedes?.id ?? null,
+    reason: i.reason,
+    createdAt: i.createdAt.toISOString(),
+  };
+}
+
+// Rows as `insertAll` answers them: JSON numbers for numeric columns, Date for times.
+interface StoredInspection {
+  id: string;
+  spec_id: string;
+  master_calibration_id: string;
+  instrument_id: string;
+  instrument_resolution_mm: number;
+  master_temperature_c: number;
+  part_temperature_c: number;
+  part_expansion_per_k: number;
+  master_expansion_per_k: number;
+  inspector_name: string;
+  supersedes_id: string | null;
+  reason: string | null;
+  created_at: Date;
+}
+interface StoredReading {
+  position: number;
+  station: string;
+  kind: InspectionReading['kind'];
+  reading_mm: number;
+}
+interface StoredResult {
+  id: string;
+  reason: string;
+  master_calibration_id: string;
+  computed: ComputedResult;
+  created_at: Date;
+}
+
+/** The same facts from the row just stored, with the part and run it was stored for. */
+function storedFacts(row: StoredInspection, part: PartRef, run: BenchRun): InspectionFacts {
+  return {
+    id: row.id,
+    partId: part.id,
+    serial: part.serial,
+    runId: run.id,
+    specId: row.spec_id,
+    masterCalibrationId: row.master_calibration_id,
+    instrumentId: row.instrument_id,
+    instrumentResolution: row.instrument_resolution_mm,
+    masterTemperature: row.master_temperature_c,
+    partTemperature: row.part_temperature_c,
+    partExpansionPerK: row.part_expansion_per_k,
+    masterExpansionPerK: row.master_expansion_per_k,
+    inspector: row.inspector_name,
+    runFlagged: run.flagged(),
+    supersedesId: row.supersedes_id,
+    reason: row.reason,
+    createdAt: row.created_at.toISOString(),
+  };
+}
+
+/** One inspection's view: its facts, readings in plan order and results newest first. */
+function inspectionView(
+  facts: InspectionFacts,
+  readings: InspectionView['readings'],
+  results: InspectionView['results'],
+  supersededById: string | undefined,
+): InspectionView {
+  return { ...facts, supersededById: supersededById ?? null, readings, result: results[0]!, results };
+}
+
 @Injectable()
 export class InspectionsService {
   constructor(
@@ -228,7 +317,10 @@ export class InspectionsService {
   /** Records one part's inspection from readings in the body's unit, computed by the server. */
   async inspect(actor: SessionUser, runId: string, input: CreateInspectionInput): Promise<InspectionView> {
     const run = await this.openRun(runId);
-    const part = await this.em.findOne(Part, { id: input.partId, lot: run.lot });
+    // One plain row: the part is only named in the records, never changed here.
+    const [part] = await this.em
+      .getConnection()
+      .execute<PartRef[]>('select id, serial from part where id = ? and lot_id = ?', [input.partId, run.lot.id]);
     if (!part)
       throw new ValidationFailedException([
         { path: 'partId', message: `There is no such part in lot ${run.lot.lotNumber}.` },
@@ -240,13 +332,21 @@ export class InspectionsService {
     if (problems.length) throw new ReadingsRefusedException(problems);
     const supersedes = input.supersedesId ? await this.supersedable(part, input.supersedesId) : undefined;
     const { rows } = await this.record(actor, run, [{ part, values, supersedes, reason: input.reason }], true);
-    // The view from the rows as stored, mapped as a read would map them, without reading them again;
-    // a new inspection is corrected by nothing yet.
-    const readings = rows.readings
-      .map((r) => this.em.map(InspectionReading, r))
-      .sort((a, b) => a.position - b.position);
-    const results = rows.results.map((r) => this.em.map(InspectionResult, r));
-    return this.view(this.em.map(Inspection, rows.inspections[0]!), readings, results, undefined);
+    // The view from the rows as stored (rounded to the columns' scales, as a read gives them),
+    // without reading them again or making entities of them; a new inspection is corrected by nothing yet.
+    const readings = (rows.readings as unknown as StoredReading[]).sort((a, b) => a.position - b.position);
+    return inspectionView(
+      storedFacts(rows.inspections[0] as unknown as StoredInspection, part, run),
+      readings.map((r) => ({ station: r.station, kind: r.kind, reading: r.reading_mm })),
+      (rows.results as unknown as StoredResult[]).map((r) =>
+        resultView({
+          ...r,
+          masterCalibrationId: r.master_calibration_id,
+          createdAt: r.created_at,
+        }),
+      ),
+      undefined,
+    );
   }
 
   /** A run that may still take inspections. */
@@ -257,17 +357,26 @@ export class InspectionsService {
   }
 
   /**
-   * Computes and stores the inspections of one run in one transaction: inspections, their readings,
-   * first results and audit entries, all or none. Written with bulk inserts rather than the unit of
-   * work, so a CSV of 100,000 readings stays within seconds: in slices of parts, each written while
-   * the next is computed (PostgreSQL stores while Node computes), so that no statement carries more
-   * than a slice and the event loop serves other requests in between.
+   * Computes and stores the inspections of one run: inspections, their readings, first results and
+   * audit entries, all or none. Written with bulk inserts rather than the unit of work, so a CSV of
+   * 100,000 readings stays within seconds: in slices of parts, one statement each, each written
+   * while the next is computed (PostgreSQL stores while Node computes), all in one transaction, so
+   * that no statement carries more than a slice and the event loop serves other requests in
+   * between. A single slice (a bench save) is one statement, atomic by itself, with no BEGIN and
+   * COMMIT round trips.
    */
   async record(actor: SessionUser, run: BenchRun, parts: PartReadings[], returnRows = false): Promise<Recorded> {
     ownRun(actor, run);
     const now = new Date();
+    const recorded: Recorded = { parts: [], rows: { inspections: [], readings: [], results: [] } };
+    const stored = returnRows ? recorded.rows : undefined;
+    if (parts.length <= SLICE) {
+      const slice = await sliceRows(actor, run, parts, now);
+      recorded.parts.push(...slice.recorded);
+      await this.writeSlice(this.em, actor, slice, stored);
+      return recorded;
+    }
     return this.em.transactional(async (em) => {
-      const recorded: Recorded = { parts: [], rows: { inspections: [], readings: [], results: [] } };
       const failures: unknown[] = [];
       let writing = Promise.resolve();
       for (let start = 0; start < parts.length && !failures.length; start += SLICE) {
@@ -276,7 +385,7 @@ export class InspectionsService {
         writing = writing.then(async () => {
           if (failures.length) return;
           try {
-            await this.writeSlice(em, actor, slice, returnRows ? recorded.rows : undefined);
+            await this.writeSlice(em, actor, slice, stored);
           } catch (error) {
             failures.push(error);
           }
@@ -288,28 +397,37 @@ export class InspectionsService {
     });
   }
 
-  /** One slice's rows, in the order their keys need; with `stored`, the rows as stored go there. */
+  /**
+   * One slice's rows in one statement (inspections before the rows that refer to them, and the
+   * audit entries with them); with `stored`, the rows as stored go there.
+   */
   private async writeSlice(
     em: EntityManager,
     actor: SessionUser,
     slice: SliceRows,
     stored: Recorded['rows'] | undefined,
   ): Promise<void> {
-    const returning = stored !== undefined;
-    let inspections: Record<string, unknown>[];
+    let written: Record<string, unknown>[][];
     try {
-      inspections = await insertRows(em, 'inspection', INSPECTION_COLUMNS, slice.inspections, returning);
+      written = await insertAll(
+        em,
+        [
+          { table: 'inspection', columns: INSPECTION_COLUMNS, rows: slice.inspections },
+          { table: 'inspection_reading', columns: READING_COLUMNS, rows: slice.readings },
+          { table: 'inspection_result', columns: RESULT_COLUMNS, rows: slice.results },
+          this.audit.rows(actor, slice.audits),
+        ],
+        stored !== undefined,
+      );
     } catch (error) {
       if (error instanceof UniqueConstraintViolationException)
         throw new InspectionSupersedeException('That inspection has already been corrected; correct the newest one.');
       throw error;
     }
-    const readings = await insertRows(em, 'inspection_reading', READING_COLUMNS, slice.readings, returning);
-    const results = await insertRows(em, 'inspection_result', RESULT_COLUMNS, slice.results, returning);
-    stored?.inspections.push(...inspections);
-    stored?.readings.push(...readings);
-    stored?.results.push(...results);
-    await this.audit.recordMany(em, actor, slice.audits);
+    const [inspections, readings, results] = written;
+    stored?.inspections.push(...inspections!);
+    stored?.readings.push(...readings!);
+    stored?.results.push(...results!);
   }
 
   /**
@@ -384,46 +502,13 @@ export class InspectionsService {
       (await this.em.find(Inspection, { supersedes: { $in: ids } })).map((c) => [c.supersedes!.id, c.id]),
     );
     return inspections.map((i) =>
-      this.view(
-        i,
-        readings.get(i.id) ?? [],
-        results.filter((r) => r.inspection.id === i.id),
+      inspectionView(
+        entityFacts(i),
+        (readings.get(i.id) ?? []).map((r) => ({ station: r.station, kind: r.kind, reading: r.readingMm })),
+        results.filter((r) => r.inspection.id === i.id).map((r) => r.toView()),
         correctedBy.get(i.id),
       ),
     );
-  }
-
-  /** One inspection's view; its part and run loaded, its results newest first. */
-  private view(
-    i: Inspection,
-    readings: InspectionReading[],
-    results: InspectionResult[],
-    supersededById: string | undefined,
-  ): InspectionView {
-    const own = results.map((r) => r.toView());
-    return {
-      id: i.id,
-      partId: i.part.id,
-      serial: i.part.serial,
-      runId: i.run.id,
-      specId: i.spec.id,
-      masterCalibrationId: i.masterCalibration.id,
-      instrumentId: i.instrumentId,
-      instrumentResolution: i.instrumentResolutionMm,
-      masterTemperature: i.masterTemperatureC,
-      partTemperature: i.partTemperatureC,
-      partExpansionPerK: i.partExpansionPerK,
-      masterExpansionPerK: i.masterExpansionPerK,
-      inspector: i.inspectorName,
-      runFlagged: i.run.flagged(),
-      supersedesId: i.supersedes?.id ?? null,
-      supersededById: supersededById ?? null,
-      reason: i.reason,
-      readings: readings.map((r) => ({ station: r.station, kind: r.kind, reading: r.readingMm })),
-      result: own[0]!,
-      results: own,
-      createdAt: i.createdAt.toISOString(),
-    };
   }
 
   /** The result in force (newest) of each inspection. */
@@ -452,8 +537,8 @@ export class InspectionsService {
   }
 
   /** The inspection a correction may supersede: the same part's, not corrected already. */
-  async supersedable(part: Part, id: string): Promise<Inspection> {
-    const old = await this.em.findOne(Inspection, { id, part });
+  async supersedable(part: PartRef, id: string): Promise<Inspection> {
+    const old = await this.em.findOne(Inspection, { id, part: part.id });
     if (!old) throw new InspectionSupersedeException(`There is no such inspection of part ${part.serial}.`);
     if (await this.em.count(Inspection, { supersedes: old }))
       throw new InspectionSupersedeException('That inspection has already been corrected; correct the newest one.');
