@@ -4,8 +4,9 @@
 // each a different part) against the built API, all at once: response times on loopback
 // (autocannon, one connection per inspector), which is the server's time to check, compute,
 // store and answer plus one loopback round trip. The floor is bare `pg`: 20 clients at once, each
-// inserting the same rows one save stores (the inspection, its 25 readings and its result, copied
-// from a saved one with new ids) in one transaction per save, timed from BEGIN to COMMIT.
+// inserting the same rows one save stores (the inspection, its 25 readings, its result and its
+// audit entry, copied from a saved one with new ids, each for a part of its own) in one
+// transaction per save, timed from BEGIN to COMMIT.
 // The database, evenset_bench_write (or BENCH_WRITE_DATABASE_URL), is made afresh for each run.
 import { randomUUID } from 'node:crypto';
 import { createRequire } from 'node:module';
@@ -76,14 +77,17 @@ function inspector(base, session, runId, partIds, stations, amount) {
   });
 }
 
-/** The rows one save stored (inspection, readings, result), to copy with new ids. */
+/** The rows one save stored (inspection, readings, result, audit entry), to copy with new ids. */
 async function savedRows(inspectionId) {
   const [inspection] = await sql(url, 'select * from inspection where id = $1', [inspectionId]);
   const readings = await sql(url, 'select * from inspection_reading where inspection_id = $1 order by position', [
     inspectionId,
   ]);
   const [result] = await sql(url, 'select * from inspection_result where inspection_id = $1', [inspectionId]);
-  return { inspection, readings, result };
+  const [audit] = await sql(url, `select * from audit_entry where subject_type = 'inspection' and subject_id = $1`, [
+    inspectionId,
+  ]);
+  return { inspection, readings, result, audit };
 }
 
 /** A multi-row INSERT of `rows` (objects keyed by column) with bind parameters. */
@@ -116,6 +120,7 @@ async function bareClient(rows, partIds, amount) {
         ),
       );
       await client.query(insert('inspection_result', [{ ...rows.result, id: randomUUID(), inspection_id: id }]));
+      await client.query(insert('audit_entry', [{ ...rows.audit, id: randomUUID(), subject_id: id }]));
       await client.query('commit');
       times.push(performance.now() - started);
     }
