@@ -140,6 +140,31 @@ describe('Bench runs and inspections', () => {
     await inspect(run.id, { partId: parts[0]!.id, unit: 'in', readings: topReadings([0]) }).expect(409);
   });
 
+  it('takes the master material’s coefficient as it is at each save, the run’s other facts as at its start', async () => {
+    const lot = await givenLot(bench, 'L-ALPHA', ['A-1', 'A-2']);
+    const [first, second] = (await partRows(bench, lot.id)).items;
+    const run = await startRun(bench, lot.id);
+    const save = async (partId: string) =>
+      (await inspect(run.id, { partId, unit: 'in', readings: topReadings([-0.0001]) }).expect(201)).body as Inspection;
+    const steel = { name: bench.steel.name, source: bench.steel.source, confidence: bench.steel.confidence };
+    const setSteel = (expansionPerK: number) =>
+      bench.engineer.agent
+        .put(`/api/materials/${bench.steel.id}`)
+        .set(CSRF_HEADER, bench.engineer.csrf)
+        .send({ ...steel, expansionPerK })
+        .expect(200);
+    expect((await save(first!.id)).masterExpansionPerK).toBe(11.5);
+    await setSteel(12);
+    try {
+      const after = await save(second!.id);
+      expect(after.masterExpansionPerK).toBe(12);
+      // The part's coefficient is the spec's, frozen at its release.
+      expect(after.partExpansionPerK).toBe(11.5);
+    } finally {
+      await setSteel(11.5);
+    }
+  });
+
   it('keeps a corrected inspection beside the one that supersedes it, with the reason', async () => {
     const lot = await givenLot(bench, 'L-CORR', ['C-1']);
     const part = (await partRows(bench, lot.id)).items[0]!;

@@ -23,6 +23,7 @@ import { MasterCalibration } from '../masters/master-calibration.entity';
 import { MasterGauge } from '../masters/master-gauge.entity';
 import { DEFAULT_MASTER_DRIFT_LIMIT_MM } from '../specs/spec.entity';
 import { BenchRun } from './bench-run.entity';
+import { RecentRuns, runFactsOf, type CalibrationFacts, type RunFacts } from './run-facts';
 import { computeResult } from './compute-result';
 import { InspectionReading } from './inspection-reading.entity';
 import { InspectionResult, resultView, type ComputedResult } from './inspection-result.entity';
@@ -47,8 +48,24 @@ export interface PartReadings {
   reason?: string;
 }
 
+/** What a save reads afresh of its run, with the part it saves. */
+interface SaveCheck {
+  ended: boolean;
+  masterExpansionPerK: number;
+  partId: string | null;
+  serial: string | null;
+}
+const SAVE_CHECK_SQL = `
+  select b.ended_at is not null as ended, m.expansion_per_k::float8 as "masterExpansionPerK",
+         p.id as "partId", p.serial
+    from bench_run b
+    join master_gauge g on g.id = b.master_id
+    join material m on m.id = g.material_id
+    left join part p on p.id = ? and p.lot_id = b.lot_id
+   where b.id = ?`;
+
 /** Another inspector may view a run, never record in it nor end it. */
-function ownRun(actor: SessionUser, run: BenchRun): void {
+function ownRun(actor: SessionUser, run: Pick<RunFacts, 'inspectorId' | 'inspectorName'>): void {
   if (run.inspectorId !== actor.id) throw new RunNotYoursException(run.inspectorName);
 }
 
@@ -118,7 +135,7 @@ type StoredInputs = Pick<
 function resultRow(
   inputs: StoredInputs,
   values: StationValue[],
-  calibration: MasterCalibration,
+  calibration: CalibrationFacts,
   reason: string,
   at: Date,
 ) {
@@ -206,7 +223,7 @@ interface StoredResult {
 }
 
 /** The same facts from the row just stored, with the part and run it was stored for. */
-function storedFacts(row: StoredInspection, part: PartRef, run: BenchRun): InspectionFacts {
+function storedFacts(row: StoredInspection, part: PartRef, run: RunFacts): InspectionFacts {
   return {
     id: row.id,
     partId: part.id,
@@ -221,7 +238,7 @@ function storedFacts(row: StoredInspection, part: PartRef, run: BenchRun): Inspe
     partExpansionPerK: row.part_expansion_per_k,
     masterExpansionPerK: row.master_expansion_per_k,
     inspector: row.inspector_name,
-    runFlagged: run.flagged(),
+    runFlagged: run.flagged,
     supersedesId: row.supersedes_id,
     reason: row.reason,
     createdAt: row.created_at.toISOString(),
@@ -240,6 +257,9 @@ function inspectionView(
 
 @Injectable()
 export class InspectionsService {
+  /** Shared by every request of this process: a run's fixed facts never change (see run-facts.ts). */
+  private readonly recentRuns = new RecentRuns();
+
   constructor(
     private readonly em: EntityManager,
     private readonly audit: AuditService,
@@ -316,17 +336,13 @@ export class InspectionsService {
 
   /** Records one part's inspection from readings in the body's unit, computed by the server. */
   async inspect(actor: SessionUser, runId: string, input: CreateInspectionInput): Promise<InspectionView> {
-    const run = await this.openRun(runId);
-    // One plain row: the part is only named in the records, never changed here.
-    const [part] = await this.em
-      .getConnection()
-      .execute<PartRef[]>('select id, serial from part where id = ? and lot_id = ?', [input.partId, run.lot.id]);
+    const { run, part } = await this.savingTo(runId, input.partId);
     if (!part)
       throw new ValidationFailedException([
-        { path: 'partId', message: `There is no such part in lot ${run.lot.lotNumber}.` },
+        { path: 'partId', message: `There is no such part in lot ${run.lotNumber}.` },
       ]);
     const { values, problems } = matchReadings(
-      planStations(run.lot.spec.plan),
+      planStations(run.spec.plan),
       input.readings.map((r) => ({ station: r.station, reading: toMm(r.reading, input.unit) })),
     );
     if (problems.length) throw new ReadingsRefusedException(problems);
@@ -357,6 +373,25 @@ export class InspectionsService {
   }
 
   /**
+   * An open run to save to, and the part of its lot being saved (if it is one), in one query: what
+   * can change of the run is read now, the rest comes from an earlier read of the same run.
+   */
+  private async savingTo(runId: string, partId: string): Promise<{ run: RunFacts; part: PartRef | undefined }> {
+    const [now] = await this.em.getConnection().execute<SaveCheck[]>(SAVE_CHECK_SQL, [partId, runId]);
+    if (!now) throw new NotFoundException('This run');
+    if (now.ended) throw new RunEndedException();
+    let fixed = this.recentRuns.get(runId);
+    if (!fixed) {
+      fixed = runFactsOf(await this.getRun(runId));
+      this.recentRuns.remember(fixed);
+    }
+    return {
+      run: { ...fixed, masterExpansionPerK: now.masterExpansionPerK },
+      part: now.partId ? { id: now.partId, serial: now.serial! } : undefined,
+    };
+  }
+
+  /**
    * Computes and stores the inspections of one run: inspections, their readings, first results and
    * audit entries, all or none. Written with bulk inserts rather than the unit of work, so a CSV of
    * 100,000 readings stays within seconds: in slices of parts, one statement each, each written
@@ -365,7 +400,7 @@ export class InspectionsService {
    * between. A single slice (a bench save) is one statement, atomic by itself, with no BEGIN and
    * COMMIT round trips.
    */
-  async record(actor: SessionUser, run: BenchRun, parts: PartReadings[], returnRows = false): Promise<Recorded> {
+  async record(actor: SessionUser, run: RunFacts, parts: PartReadings[], returnRows = false): Promise<Recorded> {
     ownRun(actor, run);
     const now = new Date();
     const recorded: Recorded = { parts: [], rows: { inspections: [], readings: [], results: [] } };
@@ -588,17 +623,16 @@ interface SliceRows {
 }
 
 /** The rows of `parts`, yielding to the event loop every few parts: queued writes go on meanwhile. */
-async function sliceRows(actor: SessionUser, run: BenchRun, parts: PartReadings[], now: Date): Promise<SliceRows> {
-  const spec = run.lot.spec;
-  const calibration = run.masterCalibration;
+async function sliceRows(actor: SessionUser, run: RunFacts, parts: PartReadings[], now: Date): Promise<SliceRows> {
+  const { spec, calibration } = run;
   const inputs = {
     spec,
     masterReadingMm: run.masterStartReadingMm,
-    instrumentResolutionMm: run.instrument.resolutionMm,
+    instrumentResolutionMm: run.instrumentResolutionMm,
     masterTemperatureC: run.masterTemperatureC,
     partTemperatureC: run.partTemperatureC,
     partExpansionPerK: spec.expansionPerK(),
-    masterExpansionPerK: run.master.material.expansionPerK,
+    masterExpansionPerK: run.masterExpansionPerK,
   };
   const rows: SliceRows = { inspections: [], readings: [], results: [], audits: [], recorded: [] };
   for (const [i, { part, values, supersedes, reason }] of parts.entries()) {
@@ -611,7 +645,7 @@ async function sliceRows(actor: SessionUser, run: BenchRun, parts: PartReadings[
       run_id: run.id,
       spec_id: spec.id,
       master_calibration_id: calibration.id,
-      instrument_id: run.instrument.id,
+      instrument_id: run.instrumentId,
       instrument_resolution_mm: inputs.instrumentResolutionMm,
       master_reading_mm: inputs.masterReadingMm,
       master_temperature_c: inputs.masterTemperatureC,

@@ -3,6 +3,7 @@ import { Injectable } from '@nestjs/common';
 import type { ReadingsImport, ReadingsPreview, RowError, SessionUser } from '@evenset/contracts';
 import type { BenchRun } from './bench-run.entity';
 import { CsvRefusedException } from './inspections.exception';
+import { runFactsOf } from './run-facts';
 import { InspectionsService, type PartReadings, type PartRef } from './inspections.service';
 import { matchReadings, planStations } from './measurement-plan';
 import { parseReadingsCsv } from './readings-csv';
@@ -28,7 +29,7 @@ export class ReadingsImportService {
     const run = await this.inspections.openRun(runId);
     const { preview, parts } = await this.map(run, content);
     if (preview.errors.length) throw new CsvRefusedException(preview.errors);
-    const recorded = (await this.inspections.record(actor, run, parts)).parts;
+    const recorded = (await this.inspections.record(actor, runFactsOf(run), parts)).parts;
     return {
       inspections: recorded.length,
       readings: parts.reduce((n, p) => n + p.values.length, 0),
