@@ -417,13 +417,12 @@ export class InspectionsService {
       for (let start = 0; start < parts.length && !failures.length; start += SLICE) {
         const slice = await sliceRows(actor, run, parts.slice(start, start + SLICE), now);
         recorded.parts.push(...slice.recorded);
-        writing = writing.then(async () => {
-          if (failures.length) return;
-          try {
-            await this.writeSlice(em, actor, slice, stored);
-          } catch (error) {
-            failures.push(error);
-          }
+        // At most one slice waits while another is written: computing runs ahead of PostgreSQL
+        // otherwise, and every slice of a large file would be held in memory at once.
+        await writing;
+        if (failures.length) break;
+        writing = this.writeSlice(em, actor, slice, stored).catch((error: unknown) => {
+          failures.push(error);
         });
       }
       await writing;
