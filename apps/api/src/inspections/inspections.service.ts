@@ -23,11 +23,18 @@ import { MasterCalibration } from '../masters/master-calibration.entity';
 import { MasterGauge } from '../masters/master-gauge.entity';
 import { DEFAULT_MASTER_DRIFT_LIMIT_MM } from '../specs/spec.entity';
 import { BenchRun } from './bench-run.entity';
-import { RecentRuns, runFactsOf, type CalibrationFacts, type RunFacts } from './run-facts';
 import { computeResult } from './compute-result';
 import { InspectionReading } from './inspection-reading.entity';
-import { InspectionResult, resultView, type ComputedResult } from './inspection-result.entity';
+import { InspectionResult, resultView } from './inspection-result.entity';
 import { Inspection } from './inspection.entity';
+import {
+  entityFacts,
+  inspectionView,
+  storedFacts,
+  type StoredInspection,
+  type StoredReading,
+  type StoredResult,
+} from './inspection-views';
 import {
   GaugeNotUsableException,
   InspectionSupersedeException,
@@ -36,6 +43,7 @@ import {
   RunNotYoursException,
 } from './inspections.exception';
 import { matchReadings, planStations, type StationValue } from './measurement-plan';
+import { RecentRuns, runFactsOf, type CalibrationFacts, type RunFacts } from './run-facts';
 
 /** A part as recording needs it: no entity, so an import of thousands stays out of the unit of work. */
 export type PartRef = Pick<Part, 'id' | 'serial'>;
@@ -164,95 +172,6 @@ function resultRow(
     computed,
     createdAt: at,
   };
-}
-
-/** What an inspection's view shows besides its readings, results and correction. */
-type InspectionFacts = Omit<InspectionView, 'readings' | 'result' | 'results' | 'supersededById'>;
-
-/** An inspection's facts from its entity, its part and run loaded. */
-function entityFacts(i: Inspection): InspectionFacts {
-  return {
-    id: i.id,
-    partId: i.part.id,
-    serial: i.part.serial,
-    runId: i.run.id,
-    specId: i.spec.id,
-    masterCalibrationId: i.masterCalibration.id,
-    instrumentId: i.instrumentId,
-    instrumentResolution: i.instrumentResolutionMm,
-    masterTemperature: i.masterTemperatureC,
-    partTemperature: i.partTemperatureC,
-    partExpansionPerK: i.partExpansionPerK,
-    masterExpansionPerK: i.masterExpansionPerK,
-    inspector: i.inspectorName,
-    runFlagged: i.run.flagged(),
-    supersedesId: i.supersedes?.id ?? null,
-    reason: i.reason,
-    createdAt: i.createdAt.toISOString(),
-  };
-}
-
-// Rows as `insertAll` answers them: JSON numbers for numeric columns, Date for times.
-interface StoredInspection {
-  id: string;
-  spec_id: string;
-  master_calibration_id: string;
-  instrument_id: string;
-  instrument_resolution_mm: number;
-  master_temperature_c: number;
-  part_temperature_c: number;
-  part_expansion_per_k: number;
-  master_expansion_per_k: number;
-  inspector_name: string;
-  supersedes_id: string | null;
-  reason: string | null;
-  created_at: Date;
-}
-interface StoredReading {
-  position: number;
-  station: string;
-  kind: InspectionReading['kind'];
-  reading_mm: number;
-}
-interface StoredResult {
-  id: string;
-  reason: string;
-  master_calibration_id: string;
-  computed: ComputedResult;
-  created_at: Date;
-}
-
-/** The same facts from the row just stored, with the part and run it was stored for. */
-function storedFacts(row: StoredInspection, part: PartRef, run: RunFacts): InspectionFacts {
-  return {
-    id: row.id,
-    partId: part.id,
-    serial: part.serial,
-    runId: run.id,
-    specId: row.spec_id,
-    masterCalibrationId: row.master_calibration_id,
-    instrumentId: row.instrument_id,
-    instrumentResolution: row.instrument_resolution_mm,
-    masterTemperature: row.master_temperature_c,
-    partTemperature: row.part_temperature_c,
-    partExpansionPerK: row.part_expansion_per_k,
-    masterExpansionPerK: row.master_expansion_per_k,
-    inspector: row.inspector_name,
-    runFlagged: run.flagged,
-    supersedesId: row.supersedes_id,
-    reason: row.reason,
-    createdAt: row.created_at.toISOString(),
-  };
-}
-
-/** One inspection's view: its facts, readings in plan order and results newest first. */
-function inspectionView(
-  facts: InspectionFacts,
-  readings: InspectionView['readings'],
-  results: InspectionView['results'],
-  supersededById: string | undefined,
-): InspectionView {
-  return { ...facts, supersededById: supersededById ?? null, readings, result: results[0]!, results };
 }
 
 @Injectable()

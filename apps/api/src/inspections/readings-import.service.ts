@@ -3,10 +3,10 @@ import { Injectable } from '@nestjs/common';
 import type { ReadingsImport, ReadingsPreview, RowError, SessionUser } from '@evenset/contracts';
 import type { BenchRun } from './bench-run.entity';
 import { CsvRefusedException } from './inspections.exception';
-import { runFactsOf } from './run-facts';
 import { InspectionsService, type PartReadings, type PartRef } from './inspections.service';
 import { matchReadings, planStations } from './measurement-plan';
 import { parseReadingsCsv } from './readings-csv';
+import { runFactsOf } from './run-facts';
 
 interface Mapped {
   preview: ReadingsPreview;
