@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable } from '@nestjs/common';
 import type { SessionUser } from '@evenset/contracts';
-import type { TableRows } from '../database/bulk-insert';
+import { insertAll, type TableRows } from '../database/bulk-insert';
 import { AuditEntry } from './audit-entry.entity';
 
 export interface AuditRecord {
@@ -45,25 +45,15 @@ export class AuditService {
   }
 
   /**
-   * Inserts many entries at once, outside the unit of work, for bulk writes (a CSV import of
-   * thousands of inspections). Call it inside the transaction that makes the changes.
+   * Inserts many entries at once, outside the unit of work. Call it inside the transaction that
+   * makes the changes (or put `rows` in the statement that writes them).
    */
   async recordMany(
     em: EntityManager,
     actor: Pick<SessionUser, 'id' | 'displayName'> | null,
     entries: AuditRecord[],
   ): Promise<void> {
-    if (!entries.length) return;
-    await em.insertMany(
-      AuditEntry,
-      entries.map((entry) => ({
-        ...entry,
-        id: randomUUID(),
-        actorId: actor?.id,
-        actorName: actor?.displayName ?? 'system',
-        createdAt: new Date(),
-      })),
-    );
+    await insertAll(em, [this.rows(actor, entries)]);
   }
 
   /**
